@@ -1,0 +1,45 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import { Module, type MiddlewareConsumer, type NestModule } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { ApiExceptionFilter } from './common/filters/api-exception.filter';
+import { RequestLoggerMiddleware } from './common/middleware/request-logger.middleware';
+import appConfig from './config/app.config';
+import databaseConfig from './config/database.config';
+import type { AllConfigType } from './config/config.type';
+import { dataSourceOptions } from './database/data-source';
+import { HealthModule } from './health/health.module';
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig], ignoreEnvFile: true }),
+    TypeOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AllConfigType>) => ({
+        ...dataSourceOptions(config.getOrThrow('database', { infer: true })),
+        retryAttempts: 3,
+        retryDelay: 1000,
+      }),
+    }),
+    // The built web app, served beside the API; every non-API path falls back to index.html
+    // so that the app's own router handles it (its 404 page included).
+    ServeStaticModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AllConfigType>) => {
+        const rootPath = config.getOrThrow('app.frontendDist', { infer: true });
+        if (!existsSync(join(rootPath, 'index.html'))) return [];
+        return [{ rootPath, exclude: ['/api/{*path}'], serveStaticOptions: { index: 'index.html' } }];
+      },
+    }),
+    HealthModule,
+  ],
+  providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
+})
+export class AppModule implements NestModule {
+  configure(consumer: MiddlewareConsumer): void {
+    consumer.apply(RequestLoggerMiddleware).forRoutes('{*path}');
+  }
+}

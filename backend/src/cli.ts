@@ -1,0 +1,44 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { readDatabaseConfig } from './config/database.config';
+import { dataSourceOptions } from './database/data-source';
+import { seedDemo } from './database/seeds/seed-demo';
+
+/**
+ * Operator commands that need the database but not the web server:
+ *   node dist/cli.js migrate        apply pending migrations
+ *   node dist/cli.js migrate:revert undo the last migration
+ *   node dist/cli.js seed           load the demo scenario (idempotent)
+ * Prints one line per step; on failure one line on stderr and exit code 1.
+ */
+async function main(command: string | undefined): Promise<void> {
+  const commands = ['migrate', 'migrate:revert', 'seed'];
+  if (!command || !commands.includes(command)) {
+    throw new Error(`Expected one of ${commands.join(', ')} but received ${command ?? 'nothing'}`);
+  }
+  const dataSource = new DataSource(dataSourceOptions(readDatabaseConfig()));
+  await dataSource.initialize();
+  try {
+    if (command === 'migrate') {
+      const applied = await dataSource.runMigrations({ transaction: 'each' });
+      console.log(
+        applied.length === 0
+          ? 'migrations: up to date'
+          : `migrations: applied ${applied.map((m) => m.name).join(', ')}`,
+      );
+    } else if (command === 'migrate:revert') {
+      await dataSource.undoLastMigration({ transaction: 'each' });
+      console.log('migrations: reverted the last one');
+    } else {
+      const summary = await seedDemo(dataSource);
+      console.log(`demo data: ${summary.usersCreated} accounts added, ${summary.usersKept} already there`);
+    }
+  } finally {
+    await dataSource.destroy();
+  }
+}
+
+main(process.argv[2]).catch((error: unknown) => {
+  console.error(`mixmark cli: ${error instanceof Error ? error.message : String(error)}`);
+  process.exit(1);
+});

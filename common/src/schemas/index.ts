@@ -1,0 +1,2 @@
+export * from './validation-details.js';
+export * from './health.schema.js';

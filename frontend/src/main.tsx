@@ -1,0 +1,15 @@
+import '@fontsource/nunito/400.css';
+import '@fontsource/nunito/700.css';
+import '@fontsource/nunito/800.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { AppProvider } from './app/provider';
+import { AppRouter } from './app/router';
+
+createRoot(document.getElementById('root')!).render(
+  <StrictMode>
+    <AppProvider>
+      <AppRouter />
+    </AppProvider>
+  </StrictMode>,
+);
