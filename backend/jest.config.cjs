@@ -21,6 +21,7 @@ module.exports = {
       rootDir: __dirname,
       testMatch: ['<rootDir>/e2e/**/*.e2e-spec.ts'],
       globalSetup: '<rootDir>/e2e/global-setup.mjs',
+      globalTeardown: '<rootDir>/e2e/global-teardown.mjs',
     },
   ],
 };

@@ -1,0 +1,41 @@
+// Jest global set-up for the e2e project: a database with every migration applied.
+// Under `npm test` the runner hands us a throwaway cluster (MIXMARK_TEST_PG_URL); run alone
+// (`npm run test:e2e -w backend`) we start one of our own and remove it afterwards.
+import { join } from 'node:path';
+import { buildIfStale } from '../../scripts/lib/builds.mjs';
+import { run } from '../../scripts/lib/proc.mjs';
+import { rootDir } from '../../scripts/lib/project.mjs';
+import { startTestCluster } from '../../scripts/lib/test-cluster.mjs';
+
+export default async function globalSetup() {
+  let baseUrl = process.env.MIXMARK_TEST_PG_URL;
+  if (!baseUrl) {
+    const testCluster = await startTestCluster();
+    globalThis.__mixmarkTestCluster = testCluster;
+    baseUrl = testCluster.cluster.url('postgres');
+    process.env.MIXMARK_TEST_PG_URL = baseUrl;
+  }
+  const databaseUrl = baseUrl.replace(/\/[^/]*$/, '/mixmark_backend_e2e');
+  await run(process.execPath, ['-e', createDatabaseScript, baseUrl, 'mixmark_backend_e2e'], { capture: true, cwd: join(rootDir, 'backend'), label: 'create the e2e database' });
+  await buildIfStale(rootDir, ['common', 'backend'], { log: () => {} });
+  await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], {
+    capture: true,
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    label: 'the e2e migrations',
+  });
+  process.env.DATABASE_URL = databaseUrl;
+  process.env.NODE_ENV = 'test';
+  process.env.LOG_LEVEL = 'warn';
+}
+
+// Drops and recreates the database so every run starts from nothing (pg is a backend dependency).
+const createDatabaseScript = `
+const { Client } = require('pg');
+const [url, name] = process.argv.slice(1);
+const client = new Client({ connectionString: url });
+client.connect()
+  .then(() => client.query('DROP DATABASE IF EXISTS "' + name + '" WITH (FORCE)'))
+  .then(() => client.query('CREATE DATABASE "' + name + '"'))
+  .then(() => client.end())
+  .catch((error) => { console.error(error.message); process.exit(1); });
+`;

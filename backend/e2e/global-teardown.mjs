@@ -1,0 +1,4 @@
+// Removes the cluster that global-setup started for a stand-alone run (none under `npm test`).
+export default async function globalTeardown() {
+  await globalThis.__mixmarkTestCluster?.remove();
+}
