@@ -13,7 +13,13 @@ export function get(url, timeoutMs = 2000) {
   });
 }
 
-/** Polls a URL until it answers 200, the child exits, or the time runs out. */
+/**
+ * Polls a URL until it answers 200, the child exits, or the time runs out.
+ *
+ * @param {string} url
+ * @param {{ timeoutMs?: number, child?: import('node:child_process').ChildProcess }} [options]
+ * @returns {Promise<boolean>}
+ */
 export async function waitForOk(url, { timeoutMs = 60000, child } = {}) {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {

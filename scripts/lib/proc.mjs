@@ -4,6 +4,11 @@ import { SetupError } from './errors.mjs';
 /**
  * Runs a command to completion. Output is inherited unless `capture` is set, in which case
  * stdout and stderr are returned. Rejects with a SetupError naming the command on failure.
+ *
+ * @param {string} command
+ * @param {string[]} args
+ * @param {{ cwd?: string, env?: NodeJS.ProcessEnv, capture?: boolean, allowFailure?: boolean, label?: string, detached?: boolean }} [options]
+ * @returns {Promise<{ code: number | null, signal: NodeJS.Signals | null, stdout: string, stderr: string }>}
  */
 export function run(
   command,

@@ -1,0 +1,48 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+/** Debian's Chromium, headless, with no background network traffic (playwright gives it a fresh temporary profile). */
+export async function launchBrowser(): Promise<{ browser: Browser; close: () => Promise<void> }> {
+  const browser = await chromium.launch({
+    executablePath: process.env.MIXMARK_CHROMIUM ?? '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  return {
+    browser,
+    close: () => browser.close(),
+  };
+}
+
+export const viewports = {
+  phone: { width: 390, height: 844 },
+  desk: { width: 1280, height: 800 },
+} as const;
+
+/** Saves a full-page screenshot under the test output folder, named by screen and width. */
+export async function screenshot(page: Page, outputDir: string, name: string): Promise<string> {
+  mkdirSync(outputDir, { recursive: true });
+  const width = page.viewportSize()?.width ?? 0;
+  const path = join(outputDir, `${name}-${width}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}
+
+/** Records every request a page makes that leaves the app's own origin. */
+export function watchForeignRequests(page: Page, origin: string): string[] {
+  const foreign: string[] = [];
+  page.on('request', (request) => {
+    const url = request.url();
+    if (!url.startsWith(origin) && !url.startsWith('data:') && !url.startsWith('blob:')) foreign.push(url);
+  });
+  return foreign;
+}

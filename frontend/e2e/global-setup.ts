@@ -1,0 +1,76 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { join } from 'node:path';
+import type { TestProject } from 'vitest/node';
+import { buildIfStale } from '../../scripts/lib/builds.mjs';
+import { waitForOk } from '../../scripts/lib/http.mjs';
+import { freePort } from '../../scripts/lib/ports.mjs';
+import { run } from '../../scripts/lib/proc.mjs';
+import { rootDir } from '../../scripts/lib/project.mjs';
+import { startTestCluster } from '../../scripts/lib/test-cluster.mjs';
+
+declare module 'vitest' {
+  export interface ProvidedContext {
+    baseUrl: string;
+    outputDir: string;
+  }
+}
+
+/**
+ * Starts the real server (built backend serving the built frontend) on a fresh database with the
+ * migrations and the demo seed applied. Under `npm test` the cluster comes from the runner.
+ */
+export default async function setup(project: TestProject) {
+  let ownCluster: Awaited<ReturnType<typeof startTestCluster>> | undefined;
+  let baseUrl = process.env.MIXMARK_TEST_PG_URL;
+  if (!baseUrl) {
+    ownCluster = await startTestCluster();
+    baseUrl = ownCluster.cluster.url('postgres');
+  }
+  await buildIfStale(rootDir, ['common', 'backend', 'frontend'], { log: () => {} });
+  const database = 'mixmark_browser_e2e';
+  const databaseUrl = baseUrl.replace(/\/[^/]*$/, `/${database}`);
+  const backend = join(rootDir, 'backend');
+  await run(process.execPath, ['-e', recreateDatabase, baseUrl, database], { cwd: backend, capture: true, label: 'create the browser-test database' });
+
+  const port = await freePort();
+  const env = {
+    ...process.env,
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'warn',
+    DATABASE_URL: databaseUrl,
+    HOST: '127.0.0.1',
+    PORT: String(port),
+    FRONTEND_DIST: join(rootDir, 'frontend', 'dist'),
+  };
+  for (const command of ['migrate', 'seed']) {
+    await run(process.execPath, [join(backend, 'dist', 'cli.js'), command], { env, capture: true, label: `backend ${command}` });
+  }
+  const server: ChildProcess = spawn(process.execPath, [join(backend, 'dist', 'main.js')], { env, stdio: ['ignore', 'inherit', 'inherit'] });
+  const url = `http://127.0.0.1:${port}`;
+  if (!(await waitForOk(`${url}/api/health`, { child: server, timeoutMs: 60_000 }))) {
+    server.kill('SIGKILL');
+    throw new Error('the server for the browser tests did not become healthy');
+  }
+  project.provide('baseUrl', url);
+  project.provide('outputDir', join(process.env.MIXMARK_TEST_OUTPUT ?? join(rootDir, 'test-output'), 'screenshots'));
+
+  return async () => {
+    await new Promise<void>((resolve) => {
+      if (server.exitCode !== null) return resolve();
+      server.once('exit', () => resolve());
+      server.kill('SIGTERM');
+    });
+    await ownCluster?.remove();
+  };
+}
+
+const recreateDatabase = `
+const { Client } = require('pg');
+const [url, name] = process.argv.slice(1);
+const client = new Client({ connectionString: url });
+client.connect()
+  .then(() => client.query('DROP DATABASE IF EXISTS "' + name + '" WITH (FORCE)'))
+  .then(() => client.query('CREATE DATABASE "' + name + '"'))
+  .then(() => client.end())
+  .catch((error) => { console.error(error.message); process.exit(1); });
+`;
