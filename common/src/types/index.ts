@@ -1,1 +1,5 @@
 export * from './colour.js';
+export * from './drill.js';
+export * from './reading.js';
+export * from './mark.js';
+export * from './grade-input.js';
