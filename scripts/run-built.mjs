@@ -11,7 +11,8 @@ runMain(async () => {
   const [entry, ...args] = process.argv.slice(2);
   if (!entry) throw new Error('usage: run-built.mjs <compiled entry> [args...]');
   await buildIfStale(rootDir, ['common', 'backend'], { log: (line) => console.error(line) });
-  const child = spawn(process.execPath, [resolve(entry), ...args], { stdio: 'inherit' });
+  // Node flags given to this wrapper (e.g. --expose-gc for benchmarks) go to the tool.
+  const child = spawn(process.execPath, [...process.execArgv, resolve(entry), ...args], { stdio: "inherit" });
   const forward = (signal) => child.kill(signal);
   process.on('SIGINT', forward);
   process.on('SIGTERM', forward);
