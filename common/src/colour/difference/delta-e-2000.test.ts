@@ -155,3 +155,23 @@ describe('deltaE76', () => {
     expect(deltaE76({ L: 10, a: 20, b: 30 }, { L: 10, a: 20, b: 30 })).toBe(0);
   });
 });
+
+describe('the short sine series inside deltaE2000', () => {
+  it('should keep ΔE00 within 1e-12 of the textbook formula across the blue region', () => {
+    // Recompute RT with Math.sin from the reported parts (Sharma eqs. 16–22).
+    for (let h = 180; h <= 360; h += 1) {
+      const x = {
+        L: 50,
+        a: 40 * Math.cos((h * Math.PI) / 180),
+        b: 40 * Math.sin((h * Math.PI) / 180),
+      };
+      const y = { L: 52, a: x.a * 1.1 + 1, b: x.b * 0.9 - 1 };
+      const p = deltaE2000Parts(x, y);
+      const { hBarPrime, C1Prime, C2Prime } = p.intermediate;
+      const dTheta = 30 * Math.exp(-(((hBarPrime - 275) / 25) ** 2));
+      const Cbar7 = ((C1Prime + C2Prime) / 2) ** 7;
+      const RT = -Math.sin((2 * dTheta * Math.PI) / 180) * 2 * Math.sqrt(Cbar7 / (Cbar7 + 25 ** 7));
+      expect(Math.abs(p.intermediate.RT - RT)).toBeLessThan(1e-12);
+    }
+  });
+});
