@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import { DataSource } from 'typeorm';
+import { DataSource, In } from 'typeorm';
 import { readDatabaseConfig } from '../src/config/database.config';
 import { dataSourceOptions } from '../src/database/data-source';
 import { demoUsers } from '../src/database/seeds/demo-data';
@@ -14,7 +14,7 @@ describe('demo seed (e2e, real PostgreSQL)', () => {
   });
 
   afterAll(async () => {
-    await dataSource.query('DELETE FROM users');
+    await dataSource.query('DELETE FROM users WHERE email = ANY($1)', [demoUsers.map((user) => user.email)]);
     await dataSource.query('DELETE FROM studios');
     await dataSource.destroy();
   });
@@ -24,7 +24,8 @@ describe('demo seed (e2e, real PostgreSQL)', () => {
     const second = await seedDemo(dataSource);
     expect(first.usersCreated + first.usersKept).toBe(demoUsers.length);
     expect(second).toEqual({ studios: 1, usersCreated: 0, usersKept: demoUsers.length });
-    expect(await dataSource.getRepository(User).count()).toBe(demoUsers.length);
+    const emails = demoUsers.map((user) => user.email);
+    expect(await dataSource.getRepository(User).countBy({ email: In(emails) })).toBe(demoUsers.length);
     const [{ count }] = await dataSource.query<{ count: number }[]>('SELECT count(*)::int AS count FROM studios');
     expect(count).toBe(1);
   });
@@ -37,8 +38,10 @@ describe('demo seed (e2e, real PostgreSQL)', () => {
   });
 
   it('should store only bcrypt hashes, never the demo password', async () => {
-    const rows = await dataSource.query<{ password_hash: string }[]>('SELECT password_hash FROM users');
-    expect(rows.length).toBeGreaterThan(0);
+    const rows = await dataSource.query<{ password_hash: string }[]>('SELECT password_hash FROM users WHERE email = ANY($1)', [
+      demoUsers.map((user) => user.email),
+    ]);
+    expect(rows.length).toBe(demoUsers.length);
     for (const row of rows) expect(row.password_hash).toMatch(/^\$2[aby]\$10\$/);
   });
 });

@@ -7,7 +7,9 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { RequestLoggerMiddleware } from './common/middleware/request-logger.middleware';
+import { AuthModule } from './auth/auth.module';
 import appConfig from './config/app.config';
+import authConfig from './config/auth.config';
 import databaseConfig from './config/database.config';
 import type { AllConfigType } from './config/config.type';
 import { dataSourceOptions } from './database/data-source';
@@ -15,7 +17,7 @@ import { HealthModule } from './health/health.module';
 
 @Module({
   imports: [
-    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig], ignoreEnvFile: true }),
+    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig, authConfig], ignoreEnvFile: true }),
     TypeOrmModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<AllConfigType>) => ({
@@ -35,6 +37,7 @@ import { HealthModule } from './health/health.module';
       },
     }),
     HealthModule,
+    AuthModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

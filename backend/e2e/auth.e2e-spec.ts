@@ -1,0 +1,132 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import type { INestApplication } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import request from 'supertest';
+import { DataSource } from 'typeorm';
+import { createTestApp } from './create-test-app';
+
+const password = 'correct horse battery';
+
+function refreshCookie(response: request.Response): string {
+  const cookies = ([] as string[]).concat(response.headers['set-cookie'] ?? []);
+  const cookie = cookies.find((c) => c.startsWith('mixmark_refresh='));
+  if (!cookie) throw new Error('no refresh cookie was set');
+  return cookie.split(';')[0];
+}
+
+describe('auth (e2e, real PostgreSQL)', () => {
+  let app: INestApplication;
+  let http: ReturnType<INestApplication['getHttpServer']>;
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    http = app.getHttpServer();
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  const register = (email = `t-${randomUUID()}@example.test`, role = 'teacher') =>
+    request(http).post('/api/auth/register').send({ email, password, displayName: 'Wren Test', role });
+
+  it('should register, sign in and say who is signed in', async () => {
+    const email = `Mixed.Case-${randomUUID()}@Example.test`;
+    const registered = await register(email).expect(201);
+    expect(registered.body.user).toMatchObject({ email: email.toLowerCase(), role: 'teacher', displayName: 'Wren Test' });
+    expect(registered.body.user.passwordHash).toBeUndefined();
+    const cookie = ([] as string[]).concat(registered.headers['set-cookie'] ?? []).join(';');
+    expect(cookie).toMatch(/HttpOnly/);
+    expect(cookie).toMatch(/SameSite=Strict/);
+    expect(cookie).toMatch(/Path=\/api\/auth/);
+
+    const signedIn = await request(http).post('/api/auth/sign-in').send({ email, password }).expect(200);
+    const me = await request(http).get('/api/auth/me').set('authorization', `Bearer ${signedIn.body.accessToken}`).expect(200);
+    expect(me.body.email).toBe(email.toLowerCase());
+  });
+
+  it('should refuse a second account with the same e-mail (409 with details.email)', async () => {
+    const email = `dup-${randomUUID()}@example.test`;
+    await register(email).expect(201);
+    const again = await register(email.toUpperCase()).expect(409);
+    expect(again.body).toMatchObject({ statusCode: 409, code: 'email_taken', details: { email: 'taken' } });
+  });
+
+  it('should answer invalid bodies with 400 naming each field', async () => {
+    const response = await request(http)
+      .post('/api/auth/register')
+      .send({ email: 'not-an-address', password: 'short', displayName: '', role: 'admin' })
+      .expect(400);
+    expect(response.body).toMatchObject({
+      statusCode: 400,
+      code: 'validation_failed',
+      details: { email: 'email', password: 'min', displayName: 'min', role: 'oneOf' },
+    });
+  });
+
+  it('should say nothing about which half of the sign-in was wrong', async () => {
+    const email = `wrong-${randomUUID()}@example.test`;
+    await register(email).expect(201);
+    const badPassword = await request(http).post('/api/auth/sign-in').send({ email, password: 'not the password' }).expect(401);
+    const noAccount = await request(http).post('/api/auth/sign-in').send({ email: `nobody-${randomUUID()}@example.test`, password }).expect(401);
+    expect(badPassword.body).toEqual(noAccount.body);
+    expect(badPassword.body.code).toBe('bad_credentials');
+  });
+
+  it('should rotate the refresh token and revoke the family when an old one is replayed', async () => {
+    const first = refreshCookie(await register().expect(201));
+    const second = await request(http).post('/api/auth/refresh').set('cookie', first).expect(200);
+    expect(second.body.accessToken).toEqual(expect.any(String));
+    const secondCookie = refreshCookie(second);
+    expect(secondCookie).not.toBe(first);
+
+    // Replaying the first token (already rotated) is theft: it fails and kills the newer one too.
+    await request(http).post('/api/auth/refresh').set('cookie', first).expect(401);
+    const afterReplay = await request(http).post('/api/auth/refresh').set('cookie', secondCookie).expect(401);
+    expect(afterReplay.body.code).toBe('session_expired');
+  });
+
+  it('should end the session on sign-out', async () => {
+    const cookie = refreshCookie(await register().expect(201));
+    await request(http).post('/api/auth/sign-out').set('cookie', cookie).expect(204);
+    await request(http).post('/api/auth/refresh').set('cookie', cookie).expect(401);
+  });
+
+  it('should keep only a hash of each refresh token', async () => {
+    const cookie = refreshCookie(await register().expect(201));
+    const [id, secret] = decodeURIComponent(cookie.split('=')[1]).split('.');
+    const [row] = await app.get(DataSource).query('SELECT token_hash FROM refresh_tokens WHERE id = $1', [id]);
+    expect(row.token_hash).toMatch(/^[0-9a-f]{64}$/);
+    expect(row.token_hash).not.toContain(secret);
+  });
+
+  it('should reject missing, tampered and expired access tokens with 401', async () => {
+    const { body } = await register().expect(201);
+    await request(http).get('/api/auth/me').expect(401);
+    const [header, payload, signature] = body.accessToken.split('.');
+    const forged = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(payload, 'base64url').toString()), role: 'admin' })).toString('base64url');
+    await request(http).get('/api/auth/me').set('authorization', `Bearer ${header}.${forged}.${signature}`).expect(401);
+    const expired = await app.get(JwtService).signAsync(
+      { sub: body.user.id, role: 'teacher' },
+      { secret: process.env.JWT_SECRET ?? 'mixmark-development-secret-not-for-production-use', expiresIn: -10 },
+    );
+    const response = await request(http).get('/api/auth/me').set('authorization', `Bearer ${expired}`).expect(401);
+    expect(response.body).toMatchObject({ statusCode: 401, code: 'unauthorized' });
+  });
+
+  it('should limit sign-in attempts per e-mail with a 429 and Retry-After', async () => {
+    const email = `limited-${randomUUID()}@example.test`;
+    const limit = Number(process.env.SIGN_IN_LIMIT_PER_MINUTE ?? 10);
+    for (let i = 0; i < limit; i += 1) {
+      await request(http).post('/api/auth/sign-in').send({ email, password: 'wrong password' }).expect(401);
+    }
+    const blocked = await request(http).post('/api/auth/sign-in').send({ email, password: 'wrong password' }).expect(429);
+    expect(blocked.body).toMatchObject({ statusCode: 429, code: 'too_many_requests' });
+    expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
+  });
+
+  it('should keep admin routes for admins', async () => {
+    const { body } = await register().expect(201);
+    await request(http).get('/api/admin/users').set('authorization', `Bearer ${body.accessToken}`).expect(403);
+  });
+});

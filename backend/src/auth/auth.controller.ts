@@ -1,0 +1,91 @@
+import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { registerSchema, signInSchema, type RegisterInput, type SignInInput } from '@mixmark/common';
+import type { Request, Response } from 'express';
+import { CurrentUser, type AuthUser } from '../common/decorators/current-user.decorator';
+import { Public } from '../common/decorators/public.decorator';
+import { SchemaValidationPipe } from '../common/pipes/schema-validation.pipe';
+import type { AllConfigType } from '../config/config.type';
+import { toPublicUser, UsersService, type PublicUser } from '../users/users.service';
+import { AuthService, type Session } from './auth.service';
+import { SignInRateLimitGuard } from './guards/sign-in-rate-limit.guard';
+
+export const REFRESH_COOKIE = 'mixmark_refresh';
+
+/** What a session reply carries in its body; the refresh token goes only in the cookie. */
+export interface SessionReply {
+  accessToken: string;
+  expiresIn: number;
+  user: PublicUser;
+}
+
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly authService: AuthService,
+    private readonly usersService: UsersService,
+    private readonly configService: ConfigService<AllConfigType>,
+  ) {}
+
+  @Public()
+  @Post('register')
+  async register(
+    @Body(new SchemaValidationPipe(registerSchema)) body: RegisterInput,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<SessionReply> {
+    return this.reply(await this.authService.register(body), response);
+  }
+
+  @Public()
+  @UseGuards(SignInRateLimitGuard)
+  @Post('sign-in')
+  @HttpCode(200)
+  async signIn(
+    @Body(new SchemaValidationPipe(signInSchema)) body: SignInInput,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<SessionReply> {
+    return this.reply(await this.authService.signIn(body), response);
+  }
+
+  @Public()
+  @Post('refresh')
+  @HttpCode(200)
+  async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionReply> {
+    try {
+      return this.reply(await this.authService.refresh(request.cookies?.[REFRESH_COOKIE]), response);
+    } catch (error) {
+      this.clearCookie(response);
+      throw error;
+    }
+  }
+
+  @Public()
+  @Post('sign-out')
+  @HttpCode(204)
+  async signOut(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<void> {
+    await this.authService.signOut(request.cookies?.[REFRESH_COOKIE]);
+    this.clearCookie(response);
+  }
+
+  @Get('me')
+  async me(@CurrentUser() caller: AuthUser): Promise<PublicUser> {
+    return toPublicUser(await this.usersService.findOne(caller.id));
+  }
+
+  private reply(session: Session, response: Response): SessionReply {
+    response.cookie(REFRESH_COOKIE, session.refreshToken, {
+      ...this.cookieOptions(),
+      expires: session.refreshExpiresAt,
+    });
+    return { accessToken: session.accessToken, expiresIn: session.expiresIn, user: session.user };
+  }
+
+  private clearCookie(response: Response): void {
+    response.clearCookie(REFRESH_COOKIE, this.cookieOptions());
+  }
+
+  private cookieOptions() {
+    const publicUrl = this.configService.getOrThrow('app.publicUrl', { infer: true });
+    return { httpOnly: true, sameSite: 'strict' as const, secure: publicUrl.startsWith('https:'), path: '/api/auth' };
+  }
+}

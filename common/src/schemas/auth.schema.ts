@@ -1,0 +1,36 @@
+import { object, string, type InferType } from 'yup';
+
+/** E-mail addresses are compared lower-cased and trimmed everywhere. */
+export const emailField = () => string().trim().lowercase().email().max(254).required();
+
+/** At least 10 characters: long enough to resist guessing, short enough to type on a phone. */
+export const passwordField = () => string().min(10).max(200).required();
+
+export const registerSchema = object({
+  email: emailField(),
+  password: passwordField(),
+  displayName: string().trim().min(1).max(80).required(),
+  /** Teachers run classes; students (and self-learners) practise. Admins are made, not registered. */
+  role: string().oneOf(['teacher', 'student'] as const).required(),
+});
+export type RegisterInput = InferType<typeof registerSchema>;
+
+export const signInSchema = object({
+  email: emailField(),
+  password: string().max(200).required(),
+});
+export type SignInInput = InferType<typeof signInSchema>;
+
+export const passwordResetRequestSchema = object({ email: emailField() });
+export type PasswordResetRequestInput = InferType<typeof passwordResetRequestSchema>;
+
+export const passwordResetSchema = object({
+  token: string().trim().min(20).max(200).required(),
+  password: passwordField(),
+});
+export type PasswordResetInput = InferType<typeof passwordResetSchema>;
+
+export const updateRoleSchema = object({
+  role: string().oneOf(['admin', 'teacher', 'student'] as const).required(),
+});
+export type UpdateRoleInput = InferType<typeof updateRoleSchema>;
