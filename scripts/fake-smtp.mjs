@@ -17,19 +17,26 @@ runMain(async () => {
       },
     }));
   } catch (error) {
-    throw new SetupError(`${error.message}; usage: node scripts/fake-smtp.mjs --port 2525 --dir .data/outbox`);
+    throw new SetupError(
+      `${error.message}; usage: node scripts/fake-smtp.mjs --port 2525 --dir .data/outbox`,
+    );
   }
   const port = Number(values.port);
   if (!Number.isInteger(port) || port < 0 || port > 65535) {
-    throw new SetupError(`--port must be a port number between 0 and 65535 but is "${values.port}"`);
+    throw new SetupError(
+      `--port must be a port number between 0 and 65535 but is "${values.port}"`,
+    );
   }
   const smtp = await startFakeSmtp({
     host: values.host,
     port,
     dir: resolve(values.dir),
-    onMessage: (message) => console.log(`${message.receivedAt}  ${message.to.join(', ')}  ${message.subject}`),
+    onMessage: (message) =>
+      console.log(`${message.receivedAt}  ${message.to.join(', ')}  ${message.subject}`),
   });
-  console.log(`Fake SMTP on smtp://${smtp.host}:${smtp.port}, keeping messages in ${smtp.dir} (Ctrl+C stops it)`);
+  console.log(
+    `Fake SMTP on smtp://${smtp.host}:${smtp.port}, keeping messages in ${smtp.dir} (Ctrl+C stops it)`,
+  );
   const stop = () => smtp.close().then(() => process.exit(0));
   process.once('SIGINT', stop);
   process.once('SIGTERM', stop);

@@ -78,12 +78,15 @@ async function keepMessage(dir, raw, envelope) {
  * await smtp.close();
  */
 export async function startFakeSmtp({ host = '127.0.0.1', port = 0, dir, onMessage } = {}) {
-  if (!dir) throw new SetupError('startFakeSmtp needs a folder to keep messages in (the dir option)');
+  if (!dir)
+    throw new SetupError('startFakeSmtp needs a folder to keep messages in (the dir option)');
   const outboxDir = resolve(dir);
   try {
     await mkdir(outboxDir, { recursive: true });
   } catch (error) {
-    throw new SetupError(`cannot create the fake SMTP outbox folder ${outboxDir}: ${error.message}`);
+    throw new SetupError(
+      `cannot create the fake SMTP outbox folder ${outboxDir}: ${error.message}`,
+    );
   }
   const server = new SMTPServer({
     name: 'mixmark-fake-smtp',
@@ -126,7 +129,9 @@ export async function startFakeSmtp({ host = '127.0.0.1', port = 0, dir, onMessa
               `port ${port} on ${host} (for the fake SMTP server) is already in use by another program: ` +
                 'stop that program, or choose another port',
             )
-          : new SetupError(`the fake SMTP server could not listen on ${host}:${port}: ${error.message}`),
+          : new SetupError(
+              `the fake SMTP server could not listen on ${host}:${port}: ${error.message}`,
+            ),
       );
     };
     server.server.once('error', onListenError);
@@ -160,7 +165,10 @@ export async function listMessages(dir) {
     if (error.code === 'ENOENT') return [];
     throw error;
   }
-  const sidecars = names.filter((name) => name.endsWith('.json')).sort().reverse();
+  const sidecars = names
+    .filter((name) => name.endsWith('.json'))
+    .sort()
+    .reverse();
   return Promise.all(
     sidecars.map(async (name) => JSON.parse(await readFile(join(dir, name), 'utf8'))),
   );

@@ -49,18 +49,30 @@ describe('fake SMTP server', () => {
     assert.equal(record.from, 'Mixmark <no-reply@mixmark.test>');
     assert.deepEqual(record.to, ['maren@studio.test', 'archive@studio.test']);
     assert.equal(record.subject, 'Your value ladder is marked: 82 — passed');
-    assert.equal(record.text, 'Hello Maren,\nstep 3 is a little light: less water, a touch more paint.\n');
+    assert.equal(
+      record.text,
+      'Hello Maren,\nstep 3 is a little light: less water, a touch more paint.\n',
+    );
     assert.equal(record.html, '<p>Hello Maren,</p><p>Step 3 is a little <em>light</em>.</p>');
     assert.ok(!Number.isNaN(Date.parse(record.receivedAt)));
     assert.ok(names[0].endsWith(`-${record.id}.eml`));
 
     const raw = readFileSync(join(dir, names[0]), 'utf8');
     assert.match(raw, /^Subject: /m);
-    assert.doesNotMatch(raw, /^Bcc:/im, 'the raw message is what the recipients get: no Bcc header');
+    assert.doesNotMatch(
+      raw,
+      /^Bcc:/im,
+      'the raw message is what the recipients get: no Bcc header',
+    );
   });
 
   it('should list kept messages newest first', async () => {
-    await transport.sendMail({ from: 'a@mixmark.test', to: 'b@studio.test', subject: 'Second', text: '2' });
+    await transport.sendMail({
+      from: 'a@mixmark.test',
+      to: 'b@studio.test',
+      subject: 'Second',
+      text: '2',
+    });
     const messages = await listMessages(dir);
     assert.deepEqual(
       messages.map((message) => message.subject),
@@ -80,7 +92,12 @@ describe('fake SMTP server', () => {
     try {
       await assert.rejects(startFakeSmtp({ port, dir }), (error) => {
         assert.ok(error instanceof SetupError);
-        assert.match(error.message, new RegExp(`^port ${port} on 127\\.0\\.0\\.1 \\(for the fake SMTP server\\) is already in use`));
+        assert.match(
+          error.message,
+          new RegExp(
+            `^port ${port} on 127\\.0\\.0\\.1 \\(for the fake SMTP server\\) is already in use`,
+          ),
+        );
         assert.doesNotMatch(error.message, /\n/);
         return true;
       });

@@ -97,7 +97,10 @@ function parseStructuredHeader(value) {
 function splitPart(raw) {
   const match = /\r?\n\r?\n/.exec(raw);
   if (!match) return { headers: parseHeaders(raw), body: '' };
-  return { headers: parseHeaders(raw.slice(0, match.index)), body: raw.slice(match.index + match[0].length) };
+  return {
+    headers: parseHeaders(raw.slice(0, match.index)),
+    body: raw.slice(match.index + match[0].length),
+  };
 }
 
 /**
@@ -120,7 +123,8 @@ function collectBodies(raw, found) {
     return;
   }
   if (disposition.type === 'attachment') return;
-  const key = contentType.type === 'text/html' ? 'html' : contentType.type === 'text/plain' ? 'text' : null;
+  const key =
+    contentType.type === 'text/html' ? 'html' : contentType.type === 'text/plain' ? 'text' : null;
   if (!key || found[key] !== undefined) return;
   const encoding = (headers.get('content-transfer-encoding')?.[0] ?? '7bit').toLowerCase();
   const bytes =
@@ -145,7 +149,9 @@ function escapeRegExp(text) {
  * parseMail('From: a@x.test\r\nTo: b@x.test\r\nSubject: Hi\r\n\r\nHello').subject; // 'Hi'
  */
 export function parseMail(source) {
-  const raw = Buffer.isBuffer(source) ? source.toString('latin1') : Buffer.from(source, 'utf8').toString('latin1');
+  const raw = Buffer.isBuffer(source)
+    ? source.toString('latin1')
+    : Buffer.from(source, 'utf8').toString('latin1');
   const { headers } = splitPart(raw);
   const found = {};
   collectBodies(raw, found);

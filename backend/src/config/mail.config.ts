@@ -10,10 +10,16 @@ const mailboxPattern = /^(?:[^<>]*<[^<>@\s]+@[^<>@\s]+>|[^<>@\s]+@[^<>@\s]+)$/;
 
 const schema = object({
   SMTP_URL: string()
-    .matches(/^smtps?:\/\/[^/\s]+/, 'SMTP_URL must be an smtp:// or smtps:// URL, e.g. smtp://127.0.0.1:2525')
+    .matches(
+      /^smtps?:\/\/[^/\s]+/,
+      'SMTP_URL must be an smtp:// or smtps:// URL, e.g. smtp://127.0.0.1:2525',
+    )
     .default('smtp://127.0.0.1:2525'),
   MAIL_FROM: string()
-    .matches(mailboxPattern, 'MAIL_FROM must be an address such as "Mixmark <no-reply@mixmark.test>"')
+    .matches(
+      mailboxPattern,
+      'MAIL_FROM must be an address such as "Mixmark <no-reply@mixmark.test>"',
+    )
     .default('Mixmark <no-reply@mixmark.test>'),
   OUTBOX_DIR: string().optional(),
 });
@@ -28,7 +34,8 @@ function findRepoRoot(start: string): string {
     const manifest = join(dir, 'package.json');
     if (existsSync(manifest)) {
       try {
-        if ((JSON.parse(readFileSync(manifest, 'utf8')) as { workspaces?: unknown }).workspaces) return dir;
+        if ((JSON.parse(readFileSync(manifest, 'utf8')) as { workspaces?: unknown }).workspaces)
+          return dir;
       } catch {
         // An unreadable package.json is not the root; keep looking up.
       }
@@ -43,7 +50,10 @@ function findRepoRoot(start: string): string {
  * fake SMTP server keeps messages in (`OUTBOX_DIR`, relative paths from the repository root).
  * @example readMailConfig({ SMTP_URL: 'smtp://127.0.0.1:2525' }).from // 'Mixmark <no-reply@mixmark.test>'
  */
-export function readMailConfig(env: Record<string, string | undefined> = process.env, cwd = process.cwd()): MailConfig {
+export function readMailConfig(
+  env: Record<string, string | undefined> = process.env,
+  cwd = process.cwd(),
+): MailConfig {
   const parsed = validateConfig(schema, env);
   const outboxDir = parsed.OUTBOX_DIR || join('.data', 'outbox');
   return {

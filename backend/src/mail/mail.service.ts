@@ -1,4 +1,9 @@
-import { Injectable, Logger, ServiceUnavailableException, type OnModuleDestroy } from '@nestjs/common';
+import {
+  Injectable,
+  Logger,
+  ServiceUnavailableException,
+  type OnModuleDestroy,
+} from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { createTransport, type Transporter } from 'nodemailer';
 import type { AllConfigType } from '../config/config.type';
@@ -60,7 +65,9 @@ export class MailService implements OnModuleDestroy {
   async send(message: MailMessage): Promise<void> {
     const to = message.to?.trim();
     if (!to || !/^[^@\s]+@[^@\s]+$/.test(to.replace(/^.*<([^<>]+)>$/, '$1'))) {
-      throw new Error(`MailService.send needs one recipient address in "to", but got "${message.to}"`);
+      throw new Error(
+        `MailService.send needs one recipient address in "to", but got "${message.to}"`,
+      );
     }
     if (!message.subject?.trim()) {
       throw new Error(`MailService.send needs a subject (mail to ${to})`);
@@ -75,7 +82,9 @@ export class MailService implements OnModuleDestroy {
       });
     } catch (error) {
       const reason = error instanceof Error ? error.message : String(error);
-      this.logger.error(`The mail "${message.subject}" to ${to} was not accepted by ${this.server}: ${reason}`);
+      this.logger.error(
+        `The mail "${message.subject}" to ${to} was not accepted by ${this.server}: ${reason}`,
+      );
       throw new ServiceUnavailableException({
         code: 'mail_unavailable',
         message: 'The e-mail could not be sent just now. Please try again in a few minutes.',

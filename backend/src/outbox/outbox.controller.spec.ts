@@ -14,7 +14,11 @@ import { OutboxModule } from './outbox.module';
 async function appFor(nodeEnv: string, outboxDir: string): Promise<INestApplication> {
   const moduleRef = await Test.createTestingModule({
     imports: [
-      ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, load: [() => ({ mail: { outboxDir } })] }),
+      ConfigModule.forRoot({
+        isGlobal: true,
+        ignoreEnvFile: true,
+        load: [() => ({ mail: { outboxDir } })],
+      }),
       OutboxModule.register(nodeEnv),
     ],
   }).compile();
@@ -42,7 +46,11 @@ describe('OutboxController over HTTP', () => {
   });
 
   it('should list, read and clear what the fake SMTP server received', async () => {
-    const transport = nodemailer.createTransport({ host: '127.0.0.1', port: smtp.port, ignoreTLS: true });
+    const transport = nodemailer.createTransport({
+      host: '127.0.0.1',
+      port: smtp.port,
+      ignoreTLS: true,
+    });
     await transport.sendMail({
       from: 'Mixmark <no-reply@mixmark.test>',
       to: 'maren@studio.test',
@@ -62,7 +70,9 @@ describe('OutboxController over HTTP', () => {
       subject: 'An invitation to Thursday watercolour',
     });
 
-    const one = await request(app.getHttpServer()).get(`/api/dev/outbox/${list.body[0].id}`).expect(200);
+    const one = await request(app.getHttpServer())
+      .get(`/api/dev/outbox/${list.body[0].id}`)
+      .expect(200);
     expect(one.body.text).toContain('token=t0k3n');
     expect(one.body.html).toContain('href="https://mixmark.test/invitations/accept?token=t0k3n"');
 
@@ -71,7 +81,9 @@ describe('OutboxController over HTTP', () => {
   });
 
   it('should answer an unknown id with the one error shape', async () => {
-    const response = await request(app.getHttpServer()).get('/api/dev/outbox/nothing-like-it').expect(404);
+    const response = await request(app.getHttpServer())
+      .get('/api/dev/outbox/nothing-like-it')
+      .expect(404);
     expect(response.body).toEqual({
       statusCode: 404,
       code: 'not_found',

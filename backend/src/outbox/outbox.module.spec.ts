@@ -10,9 +10,12 @@ describe('OutboxModule.register', () => {
     expect(module.providers ?? []).toEqual([]);
   });
 
-  it.each(['development', 'test', undefined])('should register the outbox routes when NODE_ENV is %s', (nodeEnv) => {
-    const module = OutboxModule.register(nodeEnv);
-    expect(module.controllers).toEqual([OutboxController]);
-    expect(module.providers).toEqual([OutboxService]);
-  });
+  it.each(['development', 'test', undefined])(
+    'should register the outbox routes when NODE_ENV is %s',
+    (nodeEnv) => {
+      const module = OutboxModule.register(nodeEnv);
+      expect(module.controllers).toEqual([OutboxController]);
+      expect(module.providers).toEqual([OutboxService]);
+    },
+  );
 });

@@ -46,8 +46,20 @@ describe('OutboxService', () => {
 
   it('should list messages newest first without their bodies', async () => {
     await expect(outboxService.findAll()).resolves.toEqual([
-      { id: 'bbb222', receivedAt: '2031-03-04T10:00:00.000Z', from: 'Mixmark <no-reply@mixmark.test>', to: ['maren@studio.test'], subject: 'Newer' },
-      { id: 'aaa111', receivedAt: '2031-03-04T09:00:00.000Z', from: 'Mixmark <no-reply@mixmark.test>', to: ['maren@studio.test'], subject: 'Older' },
+      {
+        id: 'bbb222',
+        receivedAt: '2031-03-04T10:00:00.000Z',
+        from: 'Mixmark <no-reply@mixmark.test>',
+        to: ['maren@studio.test'],
+        subject: 'Newer',
+      },
+      {
+        id: 'aaa111',
+        receivedAt: '2031-03-04T09:00:00.000Z',
+        from: 'Mixmark <no-reply@mixmark.test>',
+        to: ['maren@studio.test'],
+        subject: 'Older',
+      },
     ]);
   });
 

@@ -40,7 +40,13 @@ export class OutboxService {
   /** Every kept message, newest first. An outbox folder that does not exist yet is empty. */
   async findAll(): Promise<OutboxEntry[]> {
     const messages = await this.readAll();
-    return messages.map(({ id, receivedAt, from, to, subject }) => ({ id, receivedAt, from, to, subject }));
+    return messages.map(({ id, receivedAt, from, to, subject }) => ({
+      id,
+      receivedAt,
+      from,
+      to,
+      subject,
+    }));
   }
 
   /**
@@ -48,7 +54,9 @@ export class OutboxService {
    * @throws NotFoundException when no message has this id
    */
   async findOne(id: string): Promise<OutboxMessage> {
-    const name = idPattern.test(id) ? (await this.sidecarNames()).find((file) => file.endsWith(`-${id}.json`)) : undefined;
+    const name = idPattern.test(id)
+      ? (await this.sidecarNames()).find((file) => file.endsWith(`-${id}.json`))
+      : undefined;
     const message = name ? await this.readSidecar(name) : undefined;
     if (!message) throw new NotFoundException('There is no message with this id in the outbox.');
     return message;
@@ -64,7 +72,9 @@ export class OutboxService {
   }
 
   private async readAll(): Promise<OutboxMessage[]> {
-    const messages = await Promise.all((await this.sidecarNames()).map((name) => this.readSidecar(name)));
+    const messages = await Promise.all(
+      (await this.sidecarNames()).map((name) => this.readSidecar(name)),
+    );
     return messages
       .filter((message): message is OutboxMessage => message !== undefined)
       .sort((a, b) => b.receivedAt.localeCompare(a.receivedAt) || b.id.localeCompare(a.id));
@@ -86,7 +96,9 @@ export class OutboxService {
   /** A sidecar as a message, or `undefined` (logged) when it was removed or cannot be read. */
   private async readSidecar(name: string): Promise<OutboxMessage | undefined> {
     try {
-      const record = JSON.parse(await readFile(join(this.dir, name), 'utf8')) as Partial<OutboxMessage>;
+      const record = JSON.parse(
+        await readFile(join(this.dir, name), 'utf8'),
+      ) as Partial<OutboxMessage>;
       return {
         id: String(record.id),
         receivedAt: String(record.receivedAt),
@@ -98,7 +110,9 @@ export class OutboxService {
       };
     } catch (error) {
       if ((error as NodeJS.ErrnoException).code !== 'ENOENT') {
-        this.logger.warn(`Skipped the unreadable outbox file ${join(this.dir, name)}: ${(error as Error).message}`);
+        this.logger.warn(
+          `Skipped the unreadable outbox file ${join(this.dir, name)}: ${(error as Error).message}`,
+        );
       }
       return undefined;
     }

@@ -1,7 +1,7 @@
 import { assertWebUrl, oneLine } from './mail-format';
 import { actionLink, bulletList, paragraph, quotation, renderMailLayout } from './mail-layout';
 import type { MailContent } from './mail-content';
-import { html } from './safe-html';
+import { markup } from './safe-html';
 
 /** What the mail about a marked (or commented) attempt says. */
 export interface AttemptMarkedMailInput {
@@ -50,14 +50,16 @@ export function attemptMarkedMail(input: AttemptMarkedMailInput): MailContent {
   const textParts = [`Hello ${displayName},`, `${verdict} ${encouragement}`];
   if (comment) textParts.push(`${commenter} wrote:\n${comment.replace(/^/gm, '> ')}`);
   if (feedbackLines.length > 0) {
-    textParts.push(`What the measurement says:\n${feedbackLines.map((line) => `- ${line}`).join('\n')}`);
+    textParts.push(
+      `What the measurement says:\n${feedbackLines.map((line) => `- ${line}`).join('\n')}`,
+    );
   }
   textParts.push(`See the attempt, the photo and what was measured:\n${attemptUrl}`, 'Mixmark');
 
   const body = [
     paragraph(`Hello ${displayName},`),
     paragraph(
-      html`Your attempt at <strong>${drillTitle}</strong> scored <strong>${score}</strong> out of 100: ${outcome}. ${encouragement}`,
+      markup`Your attempt at <strong>${drillTitle}</strong> scored <strong>${score}</strong> out of 100: ${outcome}. ${encouragement}`,
     ),
     comment ? paragraph(`${commenter} wrote:`) : undefined,
     comment ? quotation(comment) : undefined,

@@ -3,4 +3,8 @@ export { escapeHtml } from './escape-html';
 export { invitationMail, type InvitationMailInput } from './invitation-mail';
 export type { MailContent } from './mail-content';
 export { passwordResetMail, type PasswordResetMailInput } from './password-reset-mail';
-export { weeklyDigestMail, type DigestSkill, type WeeklyDigestMailInput } from './weekly-digest-mail';
+export {
+  weeklyDigestMail,
+  type DigestSkill,
+  type WeeklyDigestMailInput,
+} from './weekly-digest-mail';

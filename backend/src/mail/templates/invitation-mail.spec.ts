@@ -11,8 +11,12 @@ const input = {
 describe('invitationMail', () => {
   it('should name the teacher and the class in the subject, text and HTML', () => {
     const mail = invitationMail(input);
-    expect(mail.subject).toBe('Wren Halloway invited you to the class Thursday watercolour on Mixmark');
-    expect(mail.text).toContain('Wren Halloway has invited you to join the class "Thursday watercolour"');
+    expect(mail.subject).toBe(
+      'Wren Halloway invited you to the class Thursday watercolour on Mixmark',
+    );
+    expect(mail.text).toContain(
+      'Wren Halloway has invited you to join the class "Thursday watercolour"',
+    );
     expect(mail.html).toContain('<strong>Wren Halloway</strong>');
     expect(mail.html).toContain('<strong>Thursday watercolour</strong>');
   });
@@ -20,7 +24,9 @@ describe('invitationMail', () => {
   it('should carry the link in both bodies, with & escaped in the HTML', () => {
     const mail = invitationMail(input);
     expect(mail.text).toContain(`\n${input.acceptUrl}\n`);
-    expect(mail.html).toContain('href="https://mixmark.test/invitations/accept?token=abc&amp;class=7"');
+    expect(mail.html).toContain(
+      'href="https://mixmark.test/invitations/accept?token=abc&amp;class=7"',
+    );
     expect(mail.html).toContain('>Join the class</a>');
   });
 
@@ -39,7 +45,9 @@ describe('invitationMail', () => {
     expect(mail.html).not.toContain('<script>');
     expect(mail.html).toContain('&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt;');
     expect(mail.html).toContain('Greys &amp;\nneutrals');
-    expect(mail.subject).toBe('<script>alert("x")</script> invited you to the class Greys & neutrals on Mixmark');
+    expect(mail.subject).toBe(
+      '<script>alert("x")</script> invited you to the class Greys & neutrals on Mixmark',
+    );
     expect(mail.text).toContain('<script>alert("x")</script> has invited you');
   });
 
@@ -47,10 +55,14 @@ describe('invitationMail', () => {
     expect(() => invitationMail({ ...input, acceptUrl: 'javascript:alert(1)' })).toThrow(
       'acceptUrl must be an absolute http(s) address, but is "javascript:alert(1)"',
     );
-    expect(() => invitationMail({ ...input, acceptUrl: '/invitations/abc' })).toThrow(/acceptUrl must be an absolute/);
+    expect(() => invitationMail({ ...input, acceptUrl: '/invitations/abc' })).toThrow(
+      /acceptUrl must be an absolute/,
+    );
   });
 
   it('should refuse an invalid expiry date', () => {
-    expect(() => invitationMail({ ...input, expiresAt: new Date('soon') })).toThrow(/must be a valid Date/);
+    expect(() => invitationMail({ ...input, expiresAt: new Date('soon') })).toThrow(
+      /must be a valid Date/,
+    );
   });
 });

@@ -1,7 +1,7 @@
 import { assertWebUrl, formatMailDateTime, oneLine } from './mail-format';
 import { actionLink, note, paragraph, renderMailLayout } from './mail-layout';
 import type { MailContent } from './mail-content';
-import { html } from './safe-html';
+import { markup } from './safe-html';
 
 /** What an invitation to a class says. */
 export interface InvitationMailInput {
@@ -37,7 +37,7 @@ export function invitationMail(input: InvitationMailInput): MailContent {
   const body = [
     paragraph('Hello,'),
     paragraph(
-      html`<strong>${teacherName}</strong> has invited you to join the class <strong>${className}</strong> on Mixmark. In the class you paint the drills your teacher sets, photograph each swatch beside the printed reference card, and see how close your mix came in value, temperature and chroma.`,
+      markup`<strong>${teacherName}</strong> has invited you to join the class <strong>${className}</strong> on Mixmark. In the class you paint the drills your teacher sets, photograph each swatch beside the printed reference card, and see how close your mix came in value, temperature and chroma.`,
     ),
     actionLink(acceptUrl, 'Join the class'),
     note(

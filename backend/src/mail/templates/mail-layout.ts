@@ -1,4 +1,4 @@
-import { html, type SafeHtml } from './safe-html';
+import { markup, type SafeHtml } from './safe-html';
 
 // Plain HTML with inline styles (mail clients drop <style> blocks), neutral greys only, no
 // images, a single column that reads on a phone. Tables for layout because many clients still
@@ -16,12 +16,12 @@ const colours = {
 
 /** A paragraph of body text. */
 export function paragraph(content: SafeHtml | string): SafeHtml {
-  return html`<p style="margin:0 0 16px 0;">${content}</p>`;
+  return markup`<p style="margin:0 0 16px 0;">${content}</p>`;
 }
 
 /** A smaller, quieter paragraph (expiry notes, "if this was not you"). */
 export function note(content: SafeHtml | string): SafeHtml {
-  return html`<p style="margin:0 0 16px 0;font-size:14px;color:${colours.muted};">${content}</p>`;
+  return markup`<p style="margin:0 0 16px 0;font-size:14px;color:${colours.muted};">${content}</p>`;
 }
 
 /**
@@ -29,28 +29,30 @@ export function note(content: SafeHtml | string): SafeHtml {
  * for clients that do not show links well.
  */
 export function actionLink(url: string, label: string): SafeHtml {
-  return html`<p style="margin:24px 0 8px 0;"><a href="${url}" style="display:inline-block;padding:11px 20px;background-color:${colours.action};color:#ffffff;text-decoration:none;border-radius:4px;font-family:${font};font-size:16px;">${label}</a></p>
+  return markup`<p style="margin:24px 0 8px 0;"><a href="${url}" style="display:inline-block;padding:11px 20px;background-color:${colours.action};color:#ffffff;text-decoration:none;border-radius:4px;font-family:${font};font-size:16px;">${label}</a></p>
 <p style="margin:0 0 20px 0;font-size:13px;color:${colours.muted};word-break:break-all;">Or copy this address into your browser: <a href="${url}" style="color:${colours.text};">${url}</a></p>`;
 }
 
 /** A bulleted list, one item per line of feedback. */
 export function bulletList(items: string[]): SafeHtml {
-  return html`<ul style="margin:0 0 16px 0;padding-left:22px;">${items.map(
-    (item) => html`<li style="margin:0 0 6px 0;">${item}</li>`,
+  return markup`<ul style="margin:0 0 16px 0;padding-left:22px;">${items.map(
+    (item) => markup`<li style="margin:0 0 6px 0;">${item}</li>`,
   )}</ul>`;
 }
 
 /** A quoted comment, its line breaks kept. */
 export function quotation(text: string): SafeHtml {
-  const lines = text.split(/\r?\n/).map((line, index) => (index === 0 ? html`${line}` : html`<br>${line}`));
-  return html`<blockquote style="margin:0 0 16px 0;padding:12px 16px;background-color:${colours.quote};border-left:3px solid ${colours.border};">${lines}</blockquote>`;
+  const lines = text
+    .split(/\r?\n/)
+    .map((line, index) => (index === 0 ? markup`${line}` : markup`<br>${line}`));
+  return markup`<blockquote style="margin:0 0 16px 0;padding:12px 16px;background-color:${colours.quote};border-left:3px solid ${colours.border};">${lines}</blockquote>`;
 }
 
 /** Label / value rows, for the figures of a summary. */
 export function figures(rows: Array<[label: string, value: string]>): SafeHtml {
-  return html`<table role="presentation" cellpadding="0" cellspacing="0" style="margin:0 0 16px 0;border-collapse:collapse;">${rows.map(
+  return markup`<table role="presentation" cellpadding="0" cellspacing="0" style="margin:0 0 16px 0;border-collapse:collapse;">${rows.map(
     ([label, value]) =>
-      html`<tr><td style="padding:4px 16px 4px 0;color:${colours.muted};vertical-align:top;">${label}</td><td style="padding:4px 0;vertical-align:top;">${value}</td></tr>`,
+      markup`<tr><td style="padding:4px 16px 4px 0;color:${colours.muted};vertical-align:top;">${label}</td><td style="padding:4px 0;vertical-align:top;">${value}</td></tr>`,
   )}</table>`;
 }
 
@@ -59,8 +61,13 @@ export function figures(rows: Array<[label: string, value: string]>): SafeHtml {
  * line saying why the reader got it.
  * @returns a complete HTML document
  */
-export function renderMailLayout(parts: { title: string; heading: string; body: SafeHtml[]; footer: string }): string {
-  return html`<!doctype html>
+export function renderMailLayout(parts: {
+  title: string;
+  heading: string;
+  body: SafeHtml[];
+  footer: string;
+}): string {
+  return markup`<!doctype html>
 <html lang="en">
 <head>
 <meta charset="utf-8">

@@ -28,7 +28,9 @@ export function passwordResetMail(input: PasswordResetMailInput): MailContent {
   const notYou =
     'If you did not ask for this, you can ignore this mail: your password stays as it is unless the link is opened.';
 
-  const text = [`Hello ${displayName},`, `${intro}\n${resetUrl}`, expiry, notYou, 'Mixmark'].join('\n\n');
+  const text = [`Hello ${displayName},`, `${intro}\n${resetUrl}`, expiry, notYou, 'Mixmark'].join(
+    '\n\n',
+  );
 
   return {
     subject,
@@ -43,7 +45,8 @@ export function passwordResetMail(input: PasswordResetMailInput): MailContent {
         note(expiry),
         note(notYou),
       ],
-      footer: 'You get this mail because a password reset was asked for the Mixmark account at this address.',
+      footer:
+        'You get this mail because a password reset was asked for the Mixmark account at this address.',
     }),
   };
 }

@@ -1,15 +1,19 @@
 import { describe, expect, it } from '@jest/globals';
 import { escapeHtml } from './escape-html';
-import { html } from './safe-html';
+import { markup } from './safe-html';
 
-describe('html template tag', () => {
+describe('markup template tag', () => {
   it('should escape every interpolated value', () => {
-    expect(html`<p title="${'"x" & \'y\''}">${'<b>'}</p>`.value).toBe('<p title="&quot;x&quot; &amp; &#39;y&#39;">&lt;b&gt;</p>');
+    expect(markup`<p title="${'"x" & \'y\''}">${'<b>'}</p>`.value).toBe(
+      '<p title="&quot;x&quot; &amp; &#39;y&#39;">&lt;b&gt;</p>',
+    );
   });
 
   it('should keep nested fragments, join arrays and drop empty values', () => {
-    const items = ['a<', 'b'].map((item) => html`<li>${item}</li>`);
-    expect(html`<ul>${items}</ul>${undefined}${null}${false}${0}`.value).toBe('<ul><li>a&lt;</li><li>b</li></ul>0');
+    const items = ['a<', 'b'].map((item) => markup`<li>${item}</li>`);
+    expect(markup`<ul>${items}</ul>${undefined}${null}${false}${0}`.value).toBe(
+      '<ul><li>a&lt;</li><li>b</li></ul>0',
+    );
   });
 
   it('should escape the five HTML-special characters', () => {

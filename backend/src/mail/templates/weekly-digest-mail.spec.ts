@@ -24,7 +24,7 @@ describe('weeklyDigestMail', () => {
     expect(mail.html).toContain('>value (how light or dark)</td>');
   });
 
-  it('should give a painter\'s tip for the weakest skill and link to the progress page', () => {
+  it("should give a painter's tip for the weakest skill and link to the progress page", () => {
     const mail = weeklyDigestMail(input);
     expect(mail.text).toContain('add a little of its complement rather than black');
     expect(mail.text).toContain(`\n${input.progressUrl}\n`);
@@ -52,6 +52,8 @@ describe('weeklyDigestMail', () => {
   });
 
   it('should refuse a pass rate given as a percentage', () => {
-    expect(() => weeklyDigestMail({ ...input, passRate: 71 })).toThrow('passRate must be a share from 0 to 1, but is 71');
+    expect(() => weeklyDigestMail({ ...input, passRate: 71 })).toThrow(
+      'passRate must be a share from 0 to 1, but is 71',
+    );
   });
 });

@@ -56,7 +56,8 @@ function describeDeltaE(deltaE: number): string {
  *   progressUrl: 'https://mixmark.test/progress' })
  */
 export function weeklyDigestMail(input: WeeklyDigestMailInput): MailContent {
-  const { displayName, attempts, passRate, meanDeltaE, bestSkill, weakestSkill, progressUrl } = input;
+  const { displayName, attempts, passRate, meanDeltaE, bestSkill, weakestSkill, progressUrl } =
+    input;
   assertWebUrl('progressUrl', progressUrl);
   if (!Number.isFinite(passRate) || passRate < 0 || passRate > 1) {
     throw new Error(`passRate must be a share from 0 to 1, but is ${String(passRate)}`);
@@ -70,19 +71,23 @@ export function weeklyDigestMail(input: WeeklyDigestMailInput): MailContent {
     rows.push(['Attempts', String(attempts)]);
     rows.push(['Passed', `${Math.round(passRate * 100)} %`]);
     if (hasDeltaE) {
-      rows.push(['Mean ΔE00 from target', `${(meanDeltaE as number).toFixed(1)}, ${describeDeltaE(meanDeltaE)}`]);
+      rows.push([
+        'Mean ΔE00 from target',
+        `${(meanDeltaE as number).toFixed(1)}, ${describeDeltaE(meanDeltaE)}`,
+      ]);
     }
     if (bestSkill) rows.push(['Strongest', skillNames[bestSkill]]);
     if (weakestSkill) rows.push(['Most room to grow', skillNames[weakestSkill]]);
   }
   const summary =
     attempts > 0
-      ? `Here is your week of ${week} at the palette.`
+      ? 'Here is how your week went at the palette.'
       : `You did not send any attempts in the week of ${week}. One short drill is enough to keep your eye in.`;
   const tip = attempts > 0 && weakestSkill ? skillTips[weakestSkill] : undefined;
 
   const textParts = [`Hello ${displayName},`, summary];
-  if (rows.length > 0) textParts.push(rows.map(([label, value]) => `${label}: ${value}`).join('\n'));
+  if (rows.length > 0)
+    textParts.push(rows.map(([label, value]) => `${label}: ${value}`).join('\n'));
   if (tip) textParts.push(tip);
   textParts.push(`Your progress, week by week:\n${progressUrl}`, 'Mixmark');
 
@@ -93,7 +98,9 @@ export function weeklyDigestMail(input: WeeklyDigestMailInput): MailContent {
     tip ? paragraph(tip) : undefined,
     actionLink(progressUrl, 'See your progress'),
     hasDeltaE
-      ? note('ΔE00 is the CIEDE2000 colour difference between your swatch and the target, measured from your photos.')
+      ? note(
+          'ΔE00 is the CIEDE2000 colour difference between your swatch and the target, measured from your photos.',
+        )
       : undefined,
   ].filter((part) => part !== undefined);
 
