@@ -1,0 +1,132 @@
+import {
+  deltaE2000Batch,
+  lightnessFromY,
+  linearSrgbToXyz,
+  xyzToLab,
+  type Lab,
+  type LabSpread,
+} from '@mixmark/common';
+import { lightAt, type ColourCorrection } from './colour-correction';
+import { quantile } from './robust-statistics';
+import type { CardSamples } from './sample-card';
+
+/** A window's reading as the measurement reports it. */
+export type WindowReading = {
+  /** Index into the layout's windows. */
+  window: number;
+  /** CIELAB (D65) of the trimmed linear-light mean. */
+  lab: Lab;
+  /** Standard deviations of L*, a*, b* over the kept pixels, and the 90th percentile of
+   * their ΔE00 from the mean (evenness of a wash). */
+  spread: LabSpread & { deltaE90: number };
+  /** L* along the long axis (long windows only), from the left end. */
+  profile?: number[];
+  /** Pixels kept after trimming. */
+  pixels: number;
+};
+
+/** Per-sample corrected linear RGB (reflectance) and luminance. */
+export function correctSamples(samples: CardSamples, correction: ColourCorrection) {
+  const n = samples.nx * samples.ny;
+  const rgb = new Float64Array(n * 3);
+  const Y = new Float64Array(n);
+  const [tr, tg, tb] = correction.tables;
+  const [lr, lg, lb] = correction.light;
+  for (let k = 0; k < n; k++) {
+    const x = samples.mm[2 * k];
+    const y = samples.mm[2 * k + 1];
+    const r = tr[samples.codes[3 * k]] / lightAt(lr, x, y);
+    const g = tg[samples.codes[3 * k + 1]] / lightAt(lg, x, y);
+    const b = tb[samples.codes[3 * k + 2]] / lightAt(lb, x, y);
+    rgb[3 * k] = r;
+    rgb[3 * k + 1] = g;
+    rgb[3 * k + 2] = b;
+    // Relative luminance of linear sRGB (IEC 61966-2-1, the Y row of the matrix).
+    Y[k] = 0.2126 * r + 0.7152 * g + 0.0722 * b;
+  }
+  return { rgb, Y };
+}
+
+const labOf = (r: number, g: number, b: number): Lab => xyzToLab(linearSrgbToXyz({ r, g, b }));
+
+/**
+ * Reads one window: corrects every sample, drops the 10 % darkest and 10 % lightest (by
+ * luminance: granulation specks, fibres, a speck of glare), averages the rest in linear
+ * light and converts that mean to CIELAB once. The spread is computed over the kept pixels;
+ * a window at least twice as long as it is high also gets its L* profile (16 slices).
+ *
+ * @param samples - samples inside the inset window
+ * @param correction - the fitted correction
+ * @param window - the window's index
+ * @returns the reading
+ */
+export function readWindow(
+  samples: CardSamples,
+  correction: ColourCorrection,
+  window: number,
+): WindowReading {
+  const { rgb, Y } = correctSamples(samples, correction);
+  const n = Y.length;
+  const low = quantile(Y, 0.1);
+  const high = quantile(Y, 0.9);
+  let sr = 0;
+  let sg = 0;
+  let sb = 0;
+  const kept: number[] = [];
+  for (let k = 0; k < n; k++) {
+    if (Y[k] < low || Y[k] > high) continue;
+    kept.push(k);
+    sr += rgb[3 * k];
+    sg += rgb[3 * k + 1];
+    sb += rgb[3 * k + 2];
+  }
+  const lab = labOf(sr / kept.length, sg / kept.length, sb / kept.length);
+  const labs = new Float64Array(kept.length * 3);
+  const means = new Float64Array(kept.length * 3);
+  let qL = 0;
+  let qa = 0;
+  let qb = 0;
+  kept.forEach((k, i) => {
+    const p = labOf(
+      Math.max(0, rgb[3 * k]),
+      Math.max(0, rgb[3 * k + 1]),
+      Math.max(0, rgb[3 * k + 2]),
+    );
+    labs.set([p.L, p.a, p.b], 3 * i);
+    means.set([lab.L, lab.a, lab.b], 3 * i);
+    qL += (p.L - lab.L) ** 2;
+    qa += (p.a - lab.a) ** 2;
+    qb += (p.b - lab.b) ** 2;
+  });
+  const dE = deltaE2000Batch(means, labs, new Float64Array(kept.length));
+  const reading: WindowReading = {
+    window,
+    lab: round(lab),
+    spread: {
+      L: fixed(Math.sqrt(qL / kept.length)),
+      a: fixed(Math.sqrt(qa / kept.length)),
+      b: fixed(Math.sqrt(qb / kept.length)),
+      deltaE90: fixed(quantile(dE, 0.9)),
+    },
+    pixels: kept.length,
+  };
+  const horizontal = samples.nx >= 2 * samples.ny;
+  if (horizontal || samples.ny >= 2 * samples.nx) {
+    const slices = 16;
+    const sums = new Float64Array(slices);
+    const counts = new Float64Array(slices);
+    for (let k = 0; k < n; k++) {
+      const along = horizontal ? k % samples.nx : Math.floor(k / samples.nx);
+      const s = Math.floor((along * slices) / (horizontal ? samples.nx : samples.ny));
+      sums[s] += Y[k];
+      counts[s]++;
+    }
+    reading.profile = Array.from(sums, (sum, s) =>
+      fixed(lightnessFromY(Math.max(0, sum / counts[s]))),
+    );
+  }
+  return reading;
+}
+
+const fixed = (v: number): number => Math.round(v * 1000) / 1000;
+const round = (lab: Lab): Lab => ({ L: fixed(lab.L), a: fixed(lab.a), b: fixed(lab.b) });
