@@ -79,7 +79,11 @@ runMain(async () => {
 
   console.log('Starting a throwaway PostgreSQL cluster for the tests...');
   const testCluster = await startTestCluster();
+  const { startFakeSmtp } = await import('./lib/fake-smtp.mjs');
+  const outboxDir = join(outDir, 'outbox');
+  const smtp = await startFakeSmtp({ port: 0, dir: outboxDir });
   const cleanUp = async () => {
+    await smtp.close();
     await testCluster.remove();
   };
   for (const signal of ['SIGINT', 'SIGTERM']) {
@@ -92,6 +96,8 @@ runMain(async () => {
     LOG_LEVEL: 'warn',
     MIXMARK_TEST_PG_URL: testCluster.cluster.url('postgres'),
     MIXMARK_TEST_OUTPUT: outDir,
+    SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,
+    OUTBOX_DIR: outboxDir,
     FORCE_COLOR: process.env.CI ? '0' : (process.env.FORCE_COLOR ?? '1'),
   };
   const results = [];

@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { buildIfStale } from '../../scripts/lib/builds.mjs';
 import { run } from '../../scripts/lib/proc.mjs';
 import { rootDir } from '../../scripts/lib/project.mjs';
+import { startFakeSmtp } from '../../scripts/lib/fake-smtp.mjs';
 import { startTestCluster } from '../../scripts/lib/test-cluster.mjs';
 
 export default async function globalSetup() {
@@ -14,6 +15,13 @@ export default async function globalSetup() {
     globalThis.__mixmarkTestCluster = testCluster;
     baseUrl = testCluster.cluster.url('postgres');
     process.env.MIXMARK_TEST_PG_URL = baseUrl;
+  }
+  if (!process.env.SMTP_URL) {
+    const dir = join(rootDir, 'test-output', 'outbox-backend');
+    const smtp = await startFakeSmtp({ port: 0, dir });
+    globalThis.__mixmarkTestSmtp = smtp;
+    process.env.SMTP_URL = `smtp://127.0.0.1:${smtp.port}`;
+    process.env.OUTBOX_DIR = dir;
   }
   const databaseUrl = baseUrl.replace(/\/[^/]*$/, '/mixmark_backend_e2e');
   await run(process.execPath, ['-e', createDatabaseScript, baseUrl, 'mixmark_backend_e2e'], { capture: true, cwd: join(rootDir, 'backend'), label: 'create the e2e database' });

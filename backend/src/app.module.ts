@@ -7,17 +7,23 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { RequestLoggerMiddleware } from './common/middleware/request-logger.middleware';
+import { AssignmentsModule } from './assignments/assignments.module';
 import { AuthModule } from './auth/auth.module';
+import { ClassesModule } from './classes/classes.module';
 import appConfig from './config/app.config';
 import authConfig from './config/auth.config';
 import databaseConfig from './config/database.config';
+import mailConfig from './config/mail.config';
 import type { AllConfigType } from './config/config.type';
 import { dataSourceOptions } from './database/data-source';
+import { DrillsModule } from './drills/drills.module';
 import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { OutboxModule } from './outbox/outbox.module';
 
 @Module({
   imports: [
-    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig, authConfig], ignoreEnvFile: true }),
+    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig, authConfig, mailConfig], ignoreEnvFile: true }),
     TypeOrmModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<AllConfigType>) => ({
@@ -37,7 +43,12 @@ import { HealthModule } from './health/health.module';
       },
     }),
     HealthModule,
+    MailModule,
+    OutboxModule.register(process.env.NODE_ENV),
     AuthModule,
+    ClassesModule,
+    DrillsModule,
+    AssignmentsModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

@@ -6,6 +6,7 @@ import { waitForOk } from '../../scripts/lib/http.mjs';
 import { freePort } from '../../scripts/lib/ports.mjs';
 import { run } from '../../scripts/lib/proc.mjs';
 import { rootDir } from '../../scripts/lib/project.mjs';
+import { startFakeSmtp } from '../../scripts/lib/fake-smtp.mjs';
 import { startTestCluster } from '../../scripts/lib/test-cluster.mjs';
 
 declare module 'vitest' {
@@ -32,6 +33,12 @@ export default async function setup(project: TestProject) {
   const backend = join(rootDir, 'backend');
   await run(process.execPath, ['-e', recreateDatabase, baseUrl, database], { cwd: backend, capture: true, label: 'create the browser-test database' });
 
+  let ownSmtp: Awaited<ReturnType<typeof startFakeSmtp>> | undefined;
+  if (!process.env.SMTP_URL) {
+    ownSmtp = await startFakeSmtp({ port: 0, dir: join(rootDir, 'test-output', 'outbox-browser') });
+  }
+  const smtpUrl = process.env.SMTP_URL ?? `smtp://127.0.0.1:${ownSmtp!.port}`;
+  const outboxDir = process.env.OUTBOX_DIR ?? join(rootDir, 'test-output', 'outbox-browser');
   const port = await freePort();
   const env = {
     ...process.env,
@@ -41,6 +48,9 @@ export default async function setup(project: TestProject) {
     HOST: '127.0.0.1',
     PORT: String(port),
     FRONTEND_DIST: join(rootDir, 'frontend', 'dist'),
+    SMTP_URL: smtpUrl,
+    OUTBOX_DIR: outboxDir,
+    PUBLIC_URL: `http://127.0.0.1:${port}`,
   };
   for (const command of ['migrate', 'seed']) {
     await run(process.execPath, [join(backend, 'dist', 'cli.js'), command], { env, capture: true, label: `backend ${command}` });
@@ -60,6 +70,7 @@ export default async function setup(project: TestProject) {
       server.once('exit', () => resolve());
       server.kill('SIGTERM');
     });
+    await ownSmtp?.close();
     await ownCluster?.remove();
   };
 }

@@ -5,6 +5,7 @@ import { SetupError } from './errors.mjs';
 import { waitForOk } from './http.mjs';
 import { assertPortFree, portFromEnv } from './ports.mjs';
 import { ensurePostgresBinaries, PostgresCluster } from './postgres.mjs';
+import { startFakeSmtp } from './fake-smtp.mjs';
 import { run } from './proc.mjs';
 import { clusterFolders, rootDir } from './project.mjs';
 
@@ -48,7 +49,7 @@ export async function openProjectCluster({ binDir, port, log = console.log, onOp
   throw new SetupError(`no folder could hold the PostgreSQL cluster: ${lastProblem}`);
 }
 
-function backendEnv({ pgUrl, port, dev }) {
+function backendEnv({ pgUrl, port, dev, smtpPort }) {
   return {
     ...process.env,
     NODE_ENV: dev ? 'development' : (process.env.NODE_ENV ?? 'development'),
@@ -56,6 +57,9 @@ function backendEnv({ pgUrl, port, dev }) {
     HOST: process.env.HOST ?? '127.0.0.1',
     PORT: String(port),
     FRONTEND_DIST: join(rootDir, 'frontend', 'dist'),
+    SMTP_URL: `smtp://127.0.0.1:${smtpPort}`,
+    OUTBOX_DIR: join(rootDir, '.data', 'outbox'),
+    PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${dev ? process.env.MIXMARK_VITE_PORT ?? 5173 : port}`,
   };
 }
 
@@ -81,16 +85,21 @@ export class Stack {
     const appPort = portFromEnv('PORT', 4310);
     const pgPort = portFromEnv('MIXMARK_PG_PORT', 54310);
     const vitePort = portFromEnv('MIXMARK_VITE_PORT', 5173);
-    this.ports = { appPort, pgPort, vitePort };
+    const smtpPort = portFromEnv('MIXMARK_SMTP_PORT', 54325);
+    this.ports = { appPort, pgPort, vitePort, smtpPort };
     await assertPortFree(appPort, { what: 'the Mixmark server', envName: 'PORT' });
     if (dev) await assertPortFree(vitePort, { what: 'the Vite dev server', envName: 'MIXMARK_VITE_PORT' });
+
+    await assertPortFree(smtpPort, { what: 'the local mail catcher', envName: 'MIXMARK_SMTP_PORT' });
+    // Every e-mail the app sends lands here (and on the outbox page), never on the internet.
+    this.smtp = await startFakeSmtp({ port: smtpPort, dir: join(rootDir, '.data', 'outbox') });
 
     const binDir = await ensurePostgresBinaries({ log });
     await openProjectCluster({ binDir, port: pgPort, log, onOpen: (cluster) => (this.cluster = cluster) });
     await this.cluster.ensureDatabase(DATABASE);
     const pgUrl = this.cluster.url(DATABASE);
     await buildIfStale(rootDir, dev ? ['common', 'backend'] : ['common', 'backend', 'frontend'], { log });
-    const env = backendEnv({ pgUrl, port: appPort, dev });
+    const env = backendEnv({ pgUrl, port: appPort, dev, smtpPort });
     const cli = join(rootDir, 'backend', 'dist', 'cli.js');
     for (const command of ['migrate', 'seed']) {
       const { stdout } = await run(process.execPath, [cli, command], { env, capture: true, label: `backend ${command}` });
@@ -131,6 +140,9 @@ export class Stack {
     const cluster = this.cluster;
     this.cluster = undefined;
     if (cluster) await cluster.stop();
+    const smtp = this.smtp;
+    this.smtp = undefined;
+    if (smtp) await smtp.close();
   }
 
   banner(seconds) {
@@ -147,13 +159,14 @@ function stopChild(child) {
   });
 }
 
-function bannerText({ appPort, vitePort, dev, pgPort, dataDir, seconds }) {
+function bannerText({ appPort, vitePort, smtpPort, dev, pgPort, dataDir, seconds }) {
   const url = dev ? `http://127.0.0.1:${vitePort}` : `http://127.0.0.1:${appPort}`;
   return [
     '',
     `Mixmark is running at ${url}   (ready in ${seconds} s)`,
     dev ? `  API with watch mode at http://127.0.0.1:${appPort}/api` : `  API at ${url}/api   health: ${url}/api/health`,
     `  PostgreSQL on 127.0.0.1:${pgPort}, data in ${dataDir}`,
+    `  E-mail is caught on 127.0.0.1:${smtpPort} and kept in .data/outbox (API: ${url}/api/dev/outbox)`,
     '',
     'Demo sign-ins (password for all: mixmark-demo):',
     '  teacher       tamsin@saltmarsh-lane.test',

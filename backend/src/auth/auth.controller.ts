@@ -1,6 +1,15 @@
 import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import { registerSchema, signInSchema, type RegisterInput, type SignInInput } from '@mixmark/common';
+import {
+  passwordResetRequestSchema,
+  passwordResetSchema,
+  registerSchema,
+  signInSchema,
+  type PasswordResetInput,
+  type PasswordResetRequestInput,
+  type RegisterInput,
+  type SignInInput,
+} from '@mixmark/common';
 import type { Request, Response } from 'express';
 import { CurrentUser, type AuthUser } from '../common/decorators/current-user.decorator';
 import { Public } from '../common/decorators/public.decorator';
@@ -9,6 +18,7 @@ import type { AllConfigType } from '../config/config.type';
 import { toPublicUser, UsersService, type PublicUser } from '../users/users.service';
 import { AuthService, type Session } from './auth.service';
 import { SignInRateLimitGuard } from './guards/sign-in-rate-limit.guard';
+import { PasswordResetsService } from './password-resets.service';
 
 export const REFRESH_COOKIE = 'mixmark_refresh';
 
@@ -24,6 +34,7 @@ export class AuthController {
   constructor(
     private readonly authService: AuthService,
     private readonly usersService: UsersService,
+    private readonly passwordResetsService: PasswordResetsService,
     private readonly configService: ConfigService<AllConfigType>,
   ) {}
 
@@ -65,6 +76,23 @@ export class AuthController {
   async signOut(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<void> {
     await this.authService.signOut(request.cookies?.[REFRESH_COOKIE]);
     this.clearCookie(response);
+  }
+
+  /** Always 202: the reply does not tell whether the address has an account. */
+  @Public()
+  @UseGuards(SignInRateLimitGuard)
+  @Post('password-reset/request')
+  @HttpCode(202)
+  async requestPasswordReset(@Body(new SchemaValidationPipe(passwordResetRequestSchema)) body: PasswordResetRequestInput): Promise<{ message: string }> {
+    await this.passwordResetsService.request(body.email);
+    return { message: 'If an account uses this address, a reset link is on its way. It works once and expires soon.' };
+  }
+
+  @Public()
+  @Post('password-reset')
+  @HttpCode(204)
+  async resetPassword(@Body(new SchemaValidationPipe(passwordResetSchema)) body: PasswordResetInput): Promise<void> {
+    await this.passwordResetsService.reset(body.token, body.password);
   }
 
   @Get('me')

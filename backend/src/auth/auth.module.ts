@@ -11,6 +11,7 @@ import { RefreshToken } from './entities/refresh-token.entity';
 import { JwtAuthGuard } from './guards/jwt-auth.guard';
 import { RolesGuard } from './guards/roles.guard';
 import { SignInRateLimitGuard } from './guards/sign-in-rate-limit.guard';
+import { PasswordResetsService } from './password-resets.service';
 import { JwtStrategy } from './strategies/jwt.strategy';
 
 @Module({
@@ -23,6 +24,7 @@ import { JwtStrategy } from './strategies/jwt.strategy';
   controllers: [AuthController],
   providers: [
     AuthService,
+    PasswordResetsService,
     JwtStrategy,
     SignInRateLimitGuard,
     { provide: APP_GUARD, useClass: JwtAuthGuard },

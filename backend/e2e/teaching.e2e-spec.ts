@@ -1,0 +1,159 @@
+import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
+import type { INestApplication } from '@nestjs/common';
+import { hexToLab } from '@mixmark/common';
+import request from 'supertest';
+import { createTestApp } from './create-test-app';
+import { latestMailTo, registerAccount, testPassword, type TestAccount } from './helpers';
+
+describe('classes, invitations, drills and assignments (e2e, real PostgreSQL and SMTP)', () => {
+  let app: INestApplication;
+  let http: ReturnType<INestApplication['getHttpServer']>;
+  let teacher: TestAccount;
+  let otherTeacher: TestAccount;
+  let student: TestAccount;
+  let outsider: TestAccount;
+  let classId: string;
+  let drillId: string;
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    http = app.getHttpServer();
+    teacher = await registerAccount(app, 'teacher', 'Odile Fernsby');
+    otherTeacher = await registerAccount(app, 'teacher');
+    student = await registerAccount(app, 'student');
+    outsider = await registerAccount(app, 'student');
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('should let a teacher make a class with a code, and a student join by that code', async () => {
+    const created = await request(http).post('/api/classes').set(teacher.auth).send({ name: 'Thursday washes' }).expect(201);
+    classId = created.body.id;
+    expect(created.body).toMatchObject({ name: 'Thursday washes', archived: false, studentCount: 0 });
+    expect(created.body.code).toMatch(/^[23456789ABCDEFGHJKMNPQRSTUVWXYZ]{6}$/);
+
+    // Typed with a space and in lower case, as people do.
+    const typed = `${created.body.code.slice(0, 3)} ${created.body.code.slice(3)}`.toLowerCase();
+    const joined = await request(http).post('/api/classes/join').set(student.auth).send({ code: typed }).expect(200);
+    expect(joined.body).toMatchObject({ id: classId, code: null, teacher: { displayName: 'Odile Fernsby' } });
+    const roster = await request(http).get(`/api/classes/${classId}/students`).set(teacher.auth).expect(200);
+    expect(roster.body.map((r: { email: string }) => r.email)).toEqual([student.email]);
+  });
+
+  it('should answer an unknown class code with a 404 naming the field', async () => {
+    const response = await request(http).post('/api/classes/join').set(student.auth).send({ code: 'ZZZZZZ' }).expect(404);
+    expect(response.body).toMatchObject({ code: 'class_code_unknown', details: { code: 'unknown' } });
+  });
+
+  it('should invite by e-mail with a link that works once', async () => {
+    const invitee = `invitee-${Date.now()}@studio.test`;
+    await request(http).post(`/api/classes/${classId}/invitations`).set(teacher.auth).send({ emails: [invitee] }).expect(201);
+    const mail = await latestMailTo(invitee);
+    expect(mail.subject).toContain('Thursday washes');
+    expect(mail.html).toContain('Odile Fernsby');
+    const link = /\/invitations\/([0-9a-f-]{36}\.[A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
+    expect(link).toBeDefined();
+
+    const preview = await request(http).get(`/api/invitations/${link}`).expect(200);
+    expect(preview.body).toMatchObject({ className: 'Thursday washes', teacherName: 'Odile Fernsby', email: invitee });
+
+    const newcomer = await request(http)
+      .post('/api/auth/register')
+      .send({ email: invitee, password: testPassword, displayName: 'Pim Newcomer', role: 'student' })
+      .expect(201);
+    const auth = { authorization: `Bearer ${newcomer.body.accessToken}` };
+    await request(http).post(`/api/invitations/${link}/accept`).set(auth).expect(200);
+    const again = await request(http).post(`/api/invitations/${link}/accept`).set(auth).expect(410);
+    expect(again.body.code).toBe('invitation_used');
+    const tampered = link!.slice(0, -3) + 'abc';
+    await request(http).get(`/api/invitations/${tampered}`).expect(404);
+  });
+
+  it('should keep another teacher\'s class invisible (404, not 403)', async () => {
+    await request(http).get(`/api/classes/${classId}`).set(otherTeacher.auth).expect(404);
+    await request(http).patch(`/api/classes/${classId}`).set(otherTeacher.auth).send({ name: 'Mine now' }).expect(404);
+    await request(http).get(`/api/classes/${classId}/students`).set(otherTeacher.auth).expect(404);
+    await request(http).get(`/api/classes/${classId}`).set(outsider.auth).expect(404);
+    await request(http).get('/api/classes/not-a-uuid').set(teacher.auth).expect(404);
+  });
+
+  it('should keep class-making for teachers', async () => {
+    const response = await request(http).post('/api/classes').set(student.auth).send({ name: 'My own' }).expect(403);
+    expect(response.body.code).toBe('forbidden');
+  });
+
+  it('should store a drill target entered as hex as CIELAB (D65)', async () => {
+    const created = await request(http)
+      .post('/api/drills')
+      .set(teacher.auth)
+      .send({
+        title: 'Match a burnt orange',
+        kind: 'match',
+        instructions: 'Mix from the warm red and the warm yellow, greyed with a touch of blue.',
+        targets: [{ hex: '#c0622f', label: 'burnt orange' }],
+        palette: [{ name: 'Warm red', pigments: ['pr255'] }],
+      })
+      .expect(201);
+    drillId = created.body.id;
+    const expected = hexToLab('#c0622f')!;
+    expect(created.body.targets[0]).toMatchObject({ label: 'burnt orange', enteredAs: 'hex' });
+    expect(created.body.targets[0].lab.L).toBeCloseTo(expected.L, 6);
+    expect(created.body.palette[0].pigments).toEqual(['PR255']);
+    expect(created.body.visibility).toBe('private');
+  });
+
+  it('should refuse a drill whose targets do not fit its kind', async () => {
+    const response = await request(http)
+      .post('/api/drills')
+      .set(teacher.auth)
+      .send({ title: 'Ladder', kind: 'value-ladder', targets: [{ lab: { L: 80, a: 0, b: 0 } }] })
+      .expect(400);
+    expect(response.body.details).toEqual({ targets: 'count' });
+    const twice = await request(http)
+      .post('/api/drills')
+      .set(teacher.auth)
+      .send({ title: 'Both', kind: 'match', targets: [{ hex: '#808080', lab: { L: 50, a: 0, b: 0 } }] })
+      .expect(400);
+    expect(twice.body.details).toEqual({ 'targets[0]': 'one-colour' });
+  });
+
+  it('should keep a private drill from other people until it is assigned to their class', async () => {
+    await request(http).get(`/api/drills/${drillId}`).set(otherTeacher.auth).expect(404);
+    await request(http).get(`/api/drills/${drillId}`).set(student.auth).expect(404);
+
+    const due = new Date(Date.now() + 7 * 86_400_000).toISOString();
+    const assigned = await request(http).post('/api/assignments').set(teacher.auth).send({ classId, drillId, dueAt: due }).expect(201);
+    expect(assigned.body).toMatchObject({ classId, drill: { id: drillId, kind: 'match' }, counts: { 'not-started': 2 } });
+
+    await request(http).get(`/api/drills/${drillId}`).set(student.auth).expect(200);
+    const mine = await request(http).get('/api/assignments').set(student.auth).expect(200);
+    expect(mine.body).toEqual([expect.objectContaining({ id: assigned.body.id, status: 'not-started', className: 'Thursday washes' })]);
+    await request(http).get(`/api/assignments/${assigned.body.id}`).set(outsider.auth).expect(404);
+    await request(http).get('/api/assignments').set(outsider.auth).expect(200).expect([]);
+  });
+
+  it('should not let a teacher assign to another teacher\'s class', async () => {
+    const due = new Date(Date.now() + 86_400_000).toISOString();
+    await request(http).post('/api/assignments').set(otherTeacher.auth).send({ classId, drillId, dueAt: due }).expect(404);
+  });
+
+  it('should duplicate a visible drill as a private copy and soft-delete the original', async () => {
+    const copy = await request(http).post(`/api/drills/${drillId}/duplicate`).set(teacher.auth).expect(201);
+    expect(copy.body).toMatchObject({ title: 'Match a burnt orange (copy)', visibility: 'private' });
+    await request(http).delete(`/api/drills/${copy.body.id}`).set(teacher.auth).expect(204);
+    await request(http).get(`/api/drills/${copy.body.id}`).set(teacher.auth).expect(404);
+  });
+
+  it('should reset a forgotten password by a single-use e-mailed link', async () => {
+    await request(http).post('/api/auth/password-reset/request').send({ email: student.email }).expect(202);
+    const unknown = await request(http).post('/api/auth/password-reset/request').send({ email: 'nobody@studio.test' }).expect(202);
+    expect(unknown.body.message).toMatch(/If an account uses this address/);
+    const mail = await latestMailTo(student.email);
+    const token = /\/reset-password\/([0-9a-f-]{36}\.[A-Za-z0-9_-]+)/.exec(mail.text)?.[1];
+    await request(http).post('/api/auth/password-reset').send({ token, password: 'a brand new password' }).expect(204);
+    await request(http).post('/api/auth/password-reset').send({ token, password: 'and another one again' }).expect(410);
+    await request(http).post('/api/auth/sign-in').send({ email: student.email, password: 'a brand new password' }).expect(200);
+    await request(http).post('/api/auth/sign-in').send({ email: student.email, password: testPassword }).expect(401);
+  });
+});

@@ -1,0 +1,31 @@
+import { describe, expect, it } from '@jest/globals';
+import { assignmentStatus, type AttemptFacts } from './assignment-status';
+
+const due = new Date('2026-12-10T18:00:00Z');
+const before = new Date('2026-12-09T12:00:00Z');
+const after = new Date('2026-12-11T12:00:00Z');
+const attempt = (state: AttemptFacts['state'], pass: boolean | null = null): AttemptFacts => ({ state, pass, createdAt: before });
+
+describe('assignmentStatus', () => {
+  it('should be not started, then late, when nothing was handed in', () => {
+    expect(assignmentStatus([], due, before)).toBe('not-started');
+    expect(assignmentStatus([], due, after)).toBe('late');
+  });
+
+  it('should keep a pass from any attempt even when a later one failed', () => {
+    expect(assignmentStatus([attempt('graded', false), attempt('graded', true)], due, after)).toBe('passed');
+  });
+
+  it('should say submitted while the newest photo is still being measured', () => {
+    expect(assignmentStatus([attempt('measuring'), attempt('graded', false)], due, before)).toBe('submitted');
+  });
+
+  it('should ask for a retake when the newest photo could not be measured', () => {
+    expect(assignmentStatus([attempt('needs-retake')], due, before)).toBe('needs-retake');
+    expect(assignmentStatus([attempt('needs-retake')], due, after)).toBe('late');
+  });
+
+  it('should say failed when the newest graded attempt did not pass', () => {
+    expect(assignmentStatus([attempt('graded', false)], due, before)).toBe('failed');
+  });
+});

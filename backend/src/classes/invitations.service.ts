@@ -1,0 +1,106 @@
+import { GoneException, Injectable, Logger, NotFoundException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import { InjectRepository } from '@nestjs/typeorm';
+import { DataSource, IsNull, Repository } from 'typeorm';
+import { hashSecret, newSecret, secretMatches, splitToken } from '../auth/tokens';
+import type { AuthUser } from '../common/decorators/current-user.decorator';
+import type { AllConfigType } from '../config/config.type';
+import { MailService } from '../mail/mail.service';
+import { invitationMail } from '../mail/templates';
+import { User } from '../users/entities/user.entity';
+import { ClassesService, type ClassSummary } from './classes.service';
+import { Invitation } from './entities/invitation.entity';
+
+export interface InvitationSummary {
+  id: string;
+  email: string;
+  expiresAt: Date;
+  acceptedAt: Date | null;
+  createdAt: Date;
+}
+
+export interface InvitationPreview {
+  className: string;
+  teacherName: string;
+  email: string;
+  expiresAt: Date;
+}
+
+const unknownInvitation = () =>
+  new NotFoundException({ code: 'invitation_unknown', message: 'This invitation link is not valid. Ask your teacher for a new one.' });
+
+@Injectable()
+export class InvitationsService {
+  private readonly logger = new Logger(InvitationsService.name);
+
+  constructor(
+    @InjectRepository(Invitation) private readonly invitationsRepository: Repository<Invitation>,
+    private readonly classesService: ClassesService,
+    private readonly mailService: MailService,
+    private readonly configService: ConfigService<AllConfigType>,
+    private readonly dataSource: DataSource,
+  ) {}
+
+  /** Invites each address by e-mail with its own single-use link; returns what was sent. */
+  async invite(teacher: AuthUser, classId: string, emails: string[]): Promise<InvitationSummary[]> {
+    const klass = await this.classesService.findOwned(teacher, classId);
+    const owner = await this.dataSource.getRepository(User).findOneByOrFail({ id: klass.teacherId });
+    const days = this.configService.getOrThrow('auth.invitationTtlDays', { infer: true });
+    const publicUrl = this.configService.getOrThrow('app.publicUrl', { infer: true });
+    const sent: InvitationSummary[] = [];
+    for (const email of [...new Set(emails)]) {
+      const secret = newSecret();
+      const invitation = await this.invitationsRepository.save(
+        this.invitationsRepository.create({ classId, email, tokenHash: hashSecret(secret), expiresAt: new Date(Date.now() + days * 86_400_000) }),
+      );
+      const acceptUrl = `${publicUrl}/invitations/${invitation.id}.${secret}`;
+      await this.mailService.send({ to: email, ...invitationMail({ teacherName: owner.displayName, className: klass.name, acceptUrl, expiresAt: invitation.expiresAt }) });
+      sent.push(this.toSummary(invitation));
+    }
+    return sent;
+  }
+
+  async findAll(teacher: AuthUser, classId: string): Promise<InvitationSummary[]> {
+    await this.classesService.findOwned(teacher, classId);
+    const rows = await this.invitationsRepository.find({ where: { classId }, order: { createdAt: 'DESC' } });
+    return rows.map((row) => this.toSummary(row));
+  }
+
+  /** What the accept page shows before the person signs in or registers. */
+  async preview(token: string): Promise<InvitationPreview> {
+    const invitation = await this.findUsable(token);
+    const [row] = await this.dataSource.query<{ class_name: string; teacher_name: string }[]>(
+      `SELECT c.name AS class_name, u.display_name AS teacher_name FROM classes c JOIN users u ON u.id = c.teacher_id WHERE c.id = $1`,
+      [invitation.classId],
+    );
+    return { className: row.class_name, teacherName: row.teacher_name, email: invitation.email, expiresAt: invitation.expiresAt };
+  }
+
+  /** Puts the signed-in student on the class roster; the link works once. */
+  async accept(student: AuthUser, token: string): Promise<ClassSummary> {
+    const invitation = await this.findUsable(token);
+    const result = await this.invitationsRepository.update(
+      { id: invitation.id, acceptedAt: IsNull() },
+      { acceptedAt: new Date(), acceptedById: student.id },
+    );
+    if (result.affected !== 1) throw new GoneException({ code: 'invitation_used', message: 'This invitation has already been used.' });
+    await this.classesService.addMember(invitation.classId, student.id);
+    return this.classesService.findOne(student, invitation.classId);
+  }
+
+  private async findUsable(token: string): Promise<Invitation> {
+    const parts = splitToken(token);
+    if (!parts) throw unknownInvitation();
+    const invitation = await this.invitationsRepository.findOneBy({ id: parts.id });
+    if (!invitation || !secretMatches(parts.secret, invitation.tokenHash)) throw unknownInvitation();
+    if (invitation.acceptedAt) throw new GoneException({ code: 'invitation_used', message: 'This invitation has already been used.' });
+    if (invitation.expiresAt.getTime() <= Date.now()) {
+      throw new GoneException({ code: 'invitation_expired', message: 'This invitation has expired. Ask your teacher to send a new one.' });
+    }
+    return invitation;
+  }
+
+  private toSummary(row: Invitation): InvitationSummary {
+    return { id: row.id, email: row.email, expiresAt: row.expiresAt, acceptedAt: row.acceptedAt, createdAt: row.createdAt };
+  }
+}
