@@ -13,6 +13,8 @@ const shared = {
 
 module.exports = {
   rootDir: __dirname,
+  // End-to-end tests boot the app, hash passwords and wait for queued grading.
+  testTimeout: 60_000,
   projects: [
     { ...shared, displayName: 'unit', rootDir: __dirname, testMatch: ['<rootDir>/src/**/*.spec.ts'] },
     {

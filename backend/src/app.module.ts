@@ -8,22 +8,25 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { RequestLoggerMiddleware } from './common/middleware/request-logger.middleware';
 import { AssignmentsModule } from './assignments/assignments.module';
+import { AttemptsModule } from './attempts/attempts.module';
 import { AuthModule } from './auth/auth.module';
 import { ClassesModule } from './classes/classes.module';
 import appConfig from './config/app.config';
 import authConfig from './config/auth.config';
 import databaseConfig from './config/database.config';
 import mailConfig from './config/mail.config';
+import storageConfig from './config/storage.config';
 import type { AllConfigType } from './config/config.type';
 import { dataSourceOptions } from './database/data-source';
 import { DrillsModule } from './drills/drills.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
+import { StorageModule } from './storage/storage.module';
 
 @Module({
   imports: [
-    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig, authConfig, mailConfig], ignoreEnvFile: true }),
+    ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig, authConfig, mailConfig, storageConfig], ignoreEnvFile: true }),
     TypeOrmModule.forRootAsync({
       inject: [ConfigService],
       useFactory: (config: ConfigService<AllConfigType>) => ({
@@ -44,11 +47,13 @@ import { OutboxModule } from './outbox/outbox.module';
     }),
     HealthModule,
     MailModule,
+    StorageModule,
     OutboxModule.register(process.env.NODE_ENV),
     AuthModule,
     ClassesModule,
     DrillsModule,
     AssignmentsModule,
+    AttemptsModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

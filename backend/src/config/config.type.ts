@@ -36,10 +36,22 @@ export interface MailConfig {
   outboxDir: string;
 }
 
+export interface StorageConfig {
+  /** Folder of the local photo store (S3-compatible storage later, behind the same interface). */
+  dir: string;
+  /** Largest photo upload accepted, bytes. */
+  uploadMaxBytes: number;
+  /** Whether this server process also works the grading queue. */
+  gradingInServer: boolean;
+  /** Grading jobs worked at once by one process. */
+  gradingConcurrency: number;
+}
+
 /** Every config namespace, for `ConfigService<AllConfigType>` with `{ infer: true }`. */
 export interface AllConfigType {
   app: AppConfig;
   database: DatabaseConfig;
   auth: AuthConfig;
   mail: MailConfig;
+  storage: StorageConfig;
 }

@@ -4,3 +4,4 @@ export * from './auth.schema.js';
 export * from './class.schema.js';
 export * from './drill.schema.js';
 export * from './assignment.schema.js';
+export * from './attempt.schema.js';

@@ -1,0 +1,79 @@
+import { Injectable, Logger, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import PgBoss from 'pg-boss';
+import type { AllConfigType } from '../config/config.type';
+import { GradingService } from './grading.service';
+
+export const GRADE_ATTEMPT = 'grade-attempt';
+
+/** Something that runs SQL inside the caller's transaction (pg-boss's `db` option). */
+export interface SqlExecutor {
+  executeSql(text: string, values: unknown[]): Promise<{ rows: unknown[] }>;
+}
+
+/**
+ * The grading queue, kept in PostgreSQL by pg-boss. Web servers only add jobs; any process that
+ * works the queue (the server itself by default, or `npm run worker -w backend` elsewhere)
+ * grades them. Jobs are retried with back-off when a worker crashes or a step throws.
+ */
+@Injectable()
+export class GradingQueue implements OnModuleInit, OnApplicationShutdown {
+  private readonly logger = new Logger(GradingQueue.name);
+  private boss: PgBoss | undefined;
+
+  constructor(
+    private readonly configService: ConfigService<AllConfigType>,
+    private readonly gradingService: GradingService,
+  ) {}
+
+  async onModuleInit(): Promise<void> {
+    const boss = new PgBoss({
+      connectionString: this.configService.getOrThrow('database.url', { infer: true }),
+      schema: 'pgboss',
+      max: 3,
+      // Maintenance (archiving, expiring) runs in the workers; web servers only send.
+      supervise: true,
+      migrate: true,
+    });
+    boss.on('error', (error) => this.logger.error(`queue: ${error.message}`));
+    await boss.start();
+    await boss.createQueue(GRADE_ATTEMPT, {
+      name: GRADE_ATTEMPT,
+      retryLimit: 4,
+      retryDelay: 2,
+      retryBackoff: true,
+      expireInSeconds: 300,
+    });
+    this.boss = boss;
+    const storage = this.configService.getOrThrow('storage', { infer: true });
+    if (storage.gradingInServer) await this.work(storage.gradingConcurrency);
+  }
+
+  /** Works the queue in this process with `concurrency` jobs at once. */
+  async work(concurrency: number): Promise<void> {
+    const boss = this.requireBoss();
+    for (let i = 0; i < concurrency; i += 1) {
+      await boss.work<{ attemptId: string }>(GRADE_ATTEMPT, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, async ([job]) => {
+        await this.gradingService.grade(job.data.attemptId, { finalTry: job.retryCount >= job.retryLimit });
+      });
+    }
+  }
+
+  /**
+   * Queues the grading of an attempt. Pass `db` to add the job in the caller's transaction, so
+   * that an attempt row never exists without its job. The attempt id is the job's singleton key:
+   * an attempt is never queued twice.
+   */
+  async enqueue(attemptId: string, db?: SqlExecutor): Promise<void> {
+    await this.requireBoss().send(GRADE_ATTEMPT, { attemptId }, { singletonKey: attemptId, db: db as never });
+  }
+
+  async onApplicationShutdown(): Promise<void> {
+    await this.boss?.stop({ graceful: true, wait: true, timeout: 20_000 });
+  }
+
+  private requireBoss(): PgBoss {
+    if (!this.boss) throw new Error('the grading queue has not started');
+    return this.boss;
+  }
+}
