@@ -15,5 +15,6 @@ export default defineConfig({
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['./src/testing/setup-tests.ts'],
     css: false,
+    testTimeout: 20_000,
   },
 });

@@ -1,23 +1,76 @@
-import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { useEffect, useState } from 'react';
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { AppLayout } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
+import { refreshSession } from '@/lib/api-client';
+import { authStore } from '@/lib/auth-store';
+import { RequireRole } from '@/lib/authorization';
 import RouteError from './routes/route-error';
 
-/** Routes load their module lazily, so each page's code comes only when it is visited. */
-export function createAppRouter() {
-  return createBrowserRouter([
-    {
-      element: <AppLayout />,
-      errorElement: <RouteError />,
-      children: [
-        { path: paths.home.path, lazy: async () => ({ Component: (await import('./routes/landing')).default }) },
-        { path: paths.status.path, lazy: async () => ({ Component: (await import('./routes/status')).default }) },
-        { path: '*', lazy: async () => ({ Component: (await import('./routes/not-found')).default }) },
-      ],
-    },
-  ]);
+type RouteModule = { default: React.ComponentType };
+
+/** A route whose module loads only when it is visited. */
+const lazyRoute = (path: string, load: () => Promise<RouteModule>): RouteObject => ({
+  path,
+  lazy: async () => ({ Component: (await load()).default }),
+});
+
+export const routes: RouteObject[] = [
+  {
+    element: <AppLayout />,
+    errorElement: <RouteError />,
+    children: [
+      lazyRoute(paths.home.path, () => import('./routes/landing')),
+      lazyRoute(paths.status.path, () => import('./routes/status')),
+      lazyRoute(paths.auth.signIn.path, () => import('./routes/auth/sign-in')),
+      lazyRoute(paths.auth.register.path, () => import('./routes/auth/register')),
+      lazyRoute(paths.auth.forgotPassword.path, () => import('./routes/auth/forgot-password')),
+      lazyRoute(paths.auth.resetPassword.path, () => import('./routes/auth/reset-password')),
+      lazyRoute(paths.invitation.path, () => import('./routes/invitation')),
+      {
+        element: <RequireRole roles={['student']} />,
+        children: [
+          lazyRoute(paths.student.assignments.path, () => import('./routes/student/assignments')),
+          lazyRoute(paths.student.join.path, () => import('./routes/student/join')),
+          lazyRoute(paths.student.library.path, () => import('./routes/student/library')),
+          lazyRoute(paths.student.drill.path, () => import('./routes/student/drill')),
+          lazyRoute(paths.student.history.path, () => import('./routes/student/history')),
+        ],
+      },
+      {
+        element: <RequireRole roles={['student', 'teacher', 'admin']} />,
+        children: [lazyRoute(paths.attempt.path, () => import('./routes/attempt'))],
+      },
+      {
+        element: <RequireRole roles={['teacher']} />,
+        children: [
+          lazyRoute(paths.teacher.dashboard.path, () => import('./routes/teacher/dashboard')),
+          lazyRoute(paths.teacher.class.path, () => import('./routes/teacher/class')),
+          lazyRoute(paths.teacher.drills.path, () => import('./routes/teacher/drills')),
+          lazyRoute(paths.teacher.newDrill.path, () => import('./routes/teacher/drill-editor')),
+          lazyRoute(paths.teacher.editDrill.path, () => import('./routes/teacher/drill-editor')),
+          lazyRoute(paths.teacher.assign.path, () => import('./routes/teacher/assign')),
+          lazyRoute(paths.teacher.assignment.path, () => import('./routes/teacher/assignment')),
+        ],
+      },
+      {
+        element: <RequireRole roles={['admin']} />,
+        children: [lazyRoute(paths.admin.users.path, () => import('./routes/admin/users'))],
+      },
+      lazyRoute('*', () => import('./routes/not-found')),
+    ],
+  },
+];
+
+/** On load, the refresh cookie (if any) brings the session back without a sign-in. */
+function useRestoreSession() {
+  useEffect(() => {
+    if (authStore.get().status === 'restoring') void refreshSession();
+  }, []);
 }
 
 export function AppRouter() {
-  return <RouterProvider router={createAppRouter()} />;
+  useRestoreSession();
+  const [router] = useState(() => createBrowserRouter(routes));
+  return <RouterProvider router={router} />;
 }

@@ -3,6 +3,7 @@ import { render, type RenderOptions } from '@testing-library/react';
 import type { ReactElement } from 'react';
 import { MemoryRouter } from 'react-router-dom';
 import { AppProvider } from '@/app/provider';
+import { authStore, type SessionUser, type UserRole } from '@/lib/auth-store';
 
 /** Renders inside the app's providers, with a fresh QueryClient that never retries. */
 export function renderApp(ui: ReactElement, { route = '/', ...options }: RenderOptions & { route?: string } = {}) {
@@ -13,4 +14,18 @@ export function renderApp(ui: ReactElement, { route = '/', ...options }: RenderO
     </AppProvider>,
     options,
   );
+}
+
+/** Puts a signed-in person of a role in the auth store, as after a sign-in. */
+export function signInAs(role: UserRole, overrides: Partial<SessionUser> = {}): SessionUser {
+  const user: SessionUser = {
+    id: '00000000-0000-4000-8000-000000000001',
+    email: `${role}@example.test`,
+    displayName: role === 'teacher' ? 'Marta Ocheltree' : 'Pip Lindqvist',
+    role,
+    createdAt: '2025-01-06T09:00:00.000Z',
+    ...overrides,
+  };
+  authStore.signIn('test-access-token', user);
+  return user;
 }

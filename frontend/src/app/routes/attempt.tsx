@@ -1,0 +1,72 @@
+import Grid from '@mui/material/Grid';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { useNavigate, useParams } from 'react-router-dom';
+import { LocalErrorBoundary } from '@/components/errors/local-error-boundary';
+import { ErrorAlert } from '@/components/ui/error-alert';
+import { Loading } from '@/components/ui/loading';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { useAttempt } from '@/features/attempts/api/get-attempt';
+import { AttemptImage } from '@/features/attempts/components/attempt-image';
+import { AttemptResult } from '@/features/attempts/components/attempt-result';
+import { OverrideForm } from '@/features/attempts/components/override-form';
+import { isPending } from '@/features/attempts/types';
+import { useUser } from '@/lib/auth-store';
+
+/** A student's result, or for the teacher the same with the photo and the override form. */
+export default function AttemptRoute() {
+  const { attemptId = '' } = useParams();
+  const user = useUser();
+  const navigate = useNavigate();
+  const attempt = useAttempt({ id: attemptId });
+
+  if (attempt.isPending) return <Loading label="Loading the attempt…" />;
+  if (attempt.isError) return <ErrorAlert error={attempt.error} onRetry={() => attempt.refetch()} />;
+  const { data } = attempt;
+  const when = new Date(data.createdAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+  if (user?.role !== 'teacher') {
+    return (
+      <>
+        <PageHeader title={data.drill.title} subtitle={`Your attempt of ${when}`} />
+        <AttemptResult
+          attempt={data}
+          onRetry={() => navigate(paths.student.drill.getHref(data.drill.id, data.assignmentId ?? undefined))}
+        />
+      </>
+    );
+  }
+
+  return (
+    <>
+      <PageHeader title={`${data.student.displayName}: ${data.drill.title}`} subtitle={`Sent ${when}`} />
+      <Grid container spacing={3}>
+        <Grid size={{ xs: 12, lg: 7 }}>
+          <AttemptResult attempt={data} />
+        </Grid>
+        <Grid size={{ xs: 12, lg: 5 }}>
+          <Stack spacing={3}>
+            <Paper sx={{ p: 2 }}>
+              <Typography variant="h3" component="h2" sx={{ mb: 1 }}>
+                The photo
+              </Typography>
+              <LocalErrorBoundary what="photo">
+                <AttemptImage id={data.id} which="photo" alt={`Photo sent by ${data.student.displayName}`} />
+              </LocalErrorBoundary>
+            </Paper>
+            {!isPending(data.state) && data.state !== 'failed' && (
+              <Paper sx={{ p: 2 }}>
+                <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
+                  Your mark
+                </Typography>
+                <OverrideForm attempt={data} />
+              </Paper>
+            )}
+          </Stack>
+        </Grid>
+      </Grid>
+    </>
+  );
+}

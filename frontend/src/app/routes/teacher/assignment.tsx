@@ -1,0 +1,27 @@
+import { useParams } from 'react-router-dom';
+import { ErrorAlert } from '@/components/ui/error-alert';
+import { Loading } from '@/components/ui/loading';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { useAssignment } from '@/features/assignments/api/get-assignment';
+import { dueWords } from '@/features/assignments/components/due-date';
+import { AttemptList } from '@/features/attempts/components/attempt-list';
+
+export default function TeacherAssignmentRoute() {
+  const { assignmentId = '' } = useParams();
+  const assignment = useAssignment({ id: assignmentId });
+  if (assignment.isPending) return <Loading label="Loading the assignment…" />;
+  if (assignment.isError) return <ErrorAlert error={assignment.error} onRetry={() => assignment.refetch()} />;
+  const { data } = assignment;
+  return (
+    <>
+      <PageHeader title={data.drill.title} subtitle={`${data.className} · ${dueWords(data.dueAt)}`} />
+      <AttemptList
+        filter={{ assignmentId }}
+        showStudent
+        attemptHref={paths.attempt.getHref}
+        emptyText="No student has sent a photo for this assignment yet."
+      />
+    </>
+  );
+}

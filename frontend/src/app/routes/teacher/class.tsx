@@ -1,0 +1,69 @@
+import Button from '@mui/material/Button';
+import Grid from '@mui/material/Grid';
+import Paper from '@mui/material/Paper';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { Link as RouterLink, useParams } from 'react-router-dom';
+import { ErrorAlert } from '@/components/ui/error-alert';
+import { Loading } from '@/components/ui/loading';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { TeacherAssignmentList } from '@/features/assignments/components/teacher-assignment-list';
+import { useClass } from '@/features/classes/api/get-class';
+import { ClassCodePanel } from '@/features/classes/components/class-code-panel';
+import { ClassSettings } from '@/features/classes/components/class-settings';
+import { InviteForm } from '@/features/classes/components/invite-form';
+import { RosterTable } from '@/features/classes/components/roster-table';
+
+export default function TeacherClassRoute() {
+  const { classId = '' } = useParams();
+  const item = useClass({ id: classId });
+  if (item.isPending) return <Loading label="Loading the class…" />;
+  if (item.isError) return <ErrorAlert error={item.error} onRetry={() => item.refetch()} />;
+  const { data } = item;
+  return (
+    <>
+      <PageHeader
+        title={data.name}
+        subtitle={`${data.studentCount} ${data.studentCount === 1 ? 'student' : 'students'}${data.archived ? ' · archived' : ''}`}
+        actions={
+          <Button variant="contained" component={RouterLink} to={paths.teacher.assign.getHref({ classId: data.id })}>
+            Assign a drill
+          </Button>
+        }
+      />
+      <Grid container spacing={3}>
+        <Grid size={{ xs: 12, md: 8 }}>
+          <Stack spacing={3}>
+            <section>
+              <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
+                Assignments
+              </Typography>
+              <TeacherAssignmentList classId={data.id} assignmentHref={paths.teacher.assignment.getHref} />
+            </section>
+            <section>
+              <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
+                Students
+              </Typography>
+              <RosterTable classId={data.id} />
+            </section>
+          </Stack>
+        </Grid>
+        <Grid size={{ xs: 12, md: 4 }}>
+          <Stack spacing={3}>
+            <ClassCodePanel code={data.code} />
+            <Paper sx={{ p: 2 }}>
+              <InviteForm classId={data.id} />
+            </Paper>
+            <Paper sx={{ p: 2 }}>
+              <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
+                Settings
+              </Typography>
+              <ClassSettings key={data.name} item={data} />
+            </Paper>
+          </Stack>
+        </Grid>
+      </Grid>
+    </>
+  );
+}

@@ -1,0 +1,32 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { ErrorAlert } from '@/components/ui/error-alert';
+import { Loading } from '@/components/ui/loading';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { useDrill } from '@/features/drills/api/get-drill';
+import { DrillEditor } from '@/features/drills/components/drill-editor';
+
+/** The drill editor's own chunk: loaded only when a teacher opens it. */
+export default function DrillEditorRoute() {
+  const { drillId } = useParams();
+  const navigate = useNavigate();
+  const drill = useDrill({ id: drillId ?? '', queryConfig: { enabled: Boolean(drillId) } });
+  const onSaved = () => navigate(paths.teacher.drills.getHref());
+
+  if (!drillId) {
+    return (
+      <>
+        <PageHeader title="New drill" />
+        <DrillEditor onSaved={onSaved} />
+      </>
+    );
+  }
+  if (drill.isPending) return <Loading label="Loading the drill…" />;
+  if (drill.isError) return <ErrorAlert error={drill.error} onRetry={() => drill.refetch()} />;
+  return (
+    <>
+      <PageHeader title={`Edit: ${drill.data.title}`} />
+      <DrillEditor key={drill.data.id} drill={drill.data} onSaved={onSaved} />
+    </>
+  );
+}
