@@ -94,6 +94,7 @@ runMain(async () => {
     ...process.env,
     NODE_ENV: 'test',
     LOG_LEVEL: 'warn',
+    BCRYPT_ROUNDS: '4',
     MIXMARK_TEST_PG_URL: testCluster.cluster.url('postgres'),
     MIXMARK_TEST_OUTPUT: outDir,
     SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,

@@ -28,6 +28,7 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
   let otherStudent: TestAccount;
   let otherTeacher: TestAccount;
   let assignmentId: string;
+  let classId: string;
   let photo: Buffer;
 
   beforeAll(async () => {
@@ -40,6 +41,7 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
       registerAccount(app, 'teacher'),
     ]);
     const klass = await request(http).post('/api/classes').set(teacher.auth).send({ name: 'Saturday mixing' }).expect(201);
+    classId = klass.body.id;
     await request(http).post('/api/classes/join').set(student.auth).send({ code: klass.body.code }).expect(200);
     const drill = await request(http)
       .post('/api/drills')
@@ -54,10 +56,10 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
     assignmentId = assignment.body.id;
     // A phone-like photo of the match card over a swatch painted exactly on target, under warm light.
     ({ jpeg: photo } = await renderScene({
-      kind: 'match', swatches: [target], width: 1600, height: 1200, cardFraction: 0.45, rotation: 8, tiltX: 6, tiltY: -4,
+      kind: 'match', swatches: [target], width: 1200, height: 900, cardFraction: 0.45, rotation: 8, tiltX: 6, tiltY: -4,
       ev: -0.3, cast: 'shade', crossTalk: 0.01, flare: 0.01, vignetting: 0.1, noise: 1.5, jpegQuality: 90, seed: 7,
     }));
-  });
+  }, 180_000);
   afterAll(async () => {
     await app.close();
   });
@@ -105,6 +107,23 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
     await request(http).get(`/api/attempts/${created.body.id}`).set(otherStudent.auth).expect(404);
     const teacherList = await request(http).get(`/api/attempts?assignmentId=${assignmentId}`).set(teacher.auth).expect(200);
     expect(teacherList.body.map((a: { id: string }) => a.id)).toContain(created.body.id);
+
+    // Progress and the gradebook reflect the overridden mark.
+    const progress = await request(http).get('/api/progress/me').set(student.auth).expect(200);
+    expect(progress.body.totals).toMatchObject({ attempts: 1, graded: 1, passed: 0 });
+    expect(progress.body.weeks).toHaveLength(1);
+    expect(progress.body.weeks[0].meanDeltaE).toBeCloseTo(miss, 1);
+    expect(progress.body.streakDays).toBe(1);
+    await request(http).get(`/api/progress/students/${student.id}`).set(teacher.auth).expect(200);
+    await request(http).get(`/api/progress/students/${student.id}`).set(otherTeacher.auth).expect(404);
+
+    const book = await request(http).get(`/api/classes/${classId}/gradebook`).set(teacher.auth).expect(200);
+    expect(book.body.students[0].cells[assignmentId]).toMatchObject({ status: 'failed', attempts: 1, latestScore: 60, bestScore: 60 });
+    const csv = await request(http).get(`/api/classes/${classId}/gradebook.csv`).set(teacher.auth).expect(200);
+    expect(csv.headers['content-type']).toMatch(/^text\/csv/);
+    expect(csv.headers['content-disposition']).toBe('attachment; filename="gradebook-Saturday-mixing.csv"');
+    expect(csv.text.split('\r\n')[1]).toMatch(/,60,failed$/);
+    await request(http).get(`/api/classes/${classId}/gradebook`).set(otherTeacher.auth).expect(404);
   });
 
   it('should ask for a retake, with the quality code, when the card is not in the photo', async () => {

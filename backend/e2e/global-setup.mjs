@@ -34,6 +34,7 @@ export default async function globalSetup() {
   process.env.DATABASE_URL = databaseUrl;
   process.env.NODE_ENV = 'test';
   process.env.LOG_LEVEL = 'warn';
+  process.env.BCRYPT_ROUNDS ??= '4';
 }
 
 // Drops and recreates the database so every run starts from nothing (pg is a backend dependency).

@@ -22,6 +22,7 @@ import { DrillsModule } from './drills/drills.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
+import { ProgressModule } from './progress/progress.module';
 import { StorageModule } from './storage/storage.module';
 
 @Module({
@@ -54,6 +55,7 @@ import { StorageModule } from './storage/storage.module';
     DrillsModule,
     AssignmentsModule,
     AttemptsModule,
+    ProgressModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

@@ -3,6 +3,9 @@ import { DataSource } from 'typeorm';
 import { readDatabaseConfig } from './config/database.config';
 import { dataSourceOptions } from './database/data-source';
 import { seedDemo } from './database/seeds/seed-demo';
+import { seedTeaching } from './database/seeds/seed-teaching';
+import { readStorageConfig } from './config/storage.config';
+import { LocalPhotoStorage } from './storage/local-photo-storage';
 
 /**
  * Operator commands that need the database but not the web server:
@@ -32,6 +35,14 @@ async function main(command: string | undefined): Promise<void> {
     } else {
       const summary = await seedDemo(dataSource);
       console.log(`demo data: ${summary.usersCreated} accounts added, ${summary.usersKept} already there`);
+      const started = Date.now();
+      const teaching = await seedTeaching(dataSource, new LocalPhotoStorage(readStorageConfig().dir));
+      console.log(
+        teaching.skipped
+          ? 'demo data: classes, drills and attempts already there'
+          : `demo data: ${teaching.classes} classes, ${teaching.drills} drills, ${teaching.assignments} assignments, ` +
+              `${teaching.attempts} attempts photographed and graded in ${((Date.now() - started) / 1000).toFixed(1)} s`,
+      );
     }
   } finally {
     await dataSource.destroy();

@@ -14,14 +14,30 @@ const MANIFESTS = [
   'docs/package.json',
 ];
 
-/** A fingerprint of everything that decides what `npm ci` installs. */
+const INSTALL_FIELDS = ['dependencies', 'devDependencies', 'optionalDependencies', 'peerDependencies', 'overrides', 'workspaces', 'allowScripts'];
+
+/**
+ * A fingerprint of everything that decides what `npm ci` installs: the lock file, and the
+ * dependency fields of each package.json (a changed script does not call for a reinstall).
+ */
 export function dependencyStamp(rootDir) {
   const hash = createHash('sha256');
   hash.update(process.version);
   for (const file of MANIFESTS) {
     const path = join(rootDir, file);
     hash.update(file);
-    if (existsSync(path)) hash.update(readFileSync(path));
+    if (!existsSync(path)) continue;
+    const text = readFileSync(path, 'utf8');
+    if (file.endsWith('package-lock.json')) {
+      hash.update(text);
+      continue;
+    }
+    try {
+      const manifest = JSON.parse(text);
+      hash.update(JSON.stringify(INSTALL_FIELDS.map((field) => manifest[field] ?? null)));
+    } catch {
+      hash.update(text);
+    }
   }
   return hash.digest('hex');
 }

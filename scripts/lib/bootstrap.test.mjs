@@ -153,14 +153,16 @@ describe('a real cluster with a stale postmaster.pid', () => {
 });
 
 describe('dependency stamp', () => {
-  it('should change when a manifest changes', () => {
+  it('should change when a dependency changes, not when a script does', () => {
     const dir = mkdtempSync(join(tmpdir(), 'mixmark-stamp-'));
     try {
       mkdirSync(join(dir, 'common'));
       writeFileSync(join(dir, 'package.json'), '{"name":"a"}');
       const first = dependencyStamp(dir);
       assert.equal(dependencyStamp(dir), first);
-      writeFileSync(join(dir, 'common', 'package.json'), '{"name":"b"}');
+      writeFileSync(join(dir, 'package.json'), '{"name":"a","scripts":{"x":"y"}}');
+      assert.equal(dependencyStamp(dir), first, 'a script change needs no reinstall');
+      writeFileSync(join(dir, 'common', 'package.json'), '{"name":"b","dependencies":{"yup":"1.7.1"}}');
       assert.notEqual(dependencyStamp(dir), first);
     } finally {
       rmSync(dir, { recursive: true, force: true });

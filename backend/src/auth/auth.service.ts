@@ -12,8 +12,6 @@ import { toPublicUser, UsersService, type PublicUser } from '../users/users.serv
 import { RefreshToken } from './entities/refresh-token.entity';
 import { hashSecret, newSecret, secretMatches, splitToken } from './tokens';
 
-/** bcrypt cost 12: ~0.25 s per hash on this machine's cores; slows guessing, fine for sign-in. */
-const BCRYPT_ROUNDS = 12;
 
 export interface Session {
   accessToken: string;
@@ -29,18 +27,23 @@ const invalidSession = () =>
 
 @Injectable()
 export class AuthService {
+  private readonly rounds: number;
   // A real hash to compare against when the e-mail is unknown, so timing does not tell.
-  private readonly decoyHash = bcrypt.hashSync('decoy-password-for-timing', BCRYPT_ROUNDS);
+  private readonly decoyHash: string;
 
   constructor(
     private readonly usersService: UsersService,
     private readonly jwtService: JwtService,
     private readonly configService: ConfigService<AllConfigType>,
     @InjectRepository(RefreshToken) private readonly refreshTokensRepository: Repository<RefreshToken>,
-  ) {}
+  ) {
+    this.rounds = configService.getOrThrow('auth.bcryptRounds', { infer: true });
+    this.decoyHash = bcrypt.hashSync('decoy-password-for-timing', this.rounds);
+  }
 
+  /** bcrypt with the configured cost (12 by default: slows guessing, fine for sign-in). */
   hashPassword(password: string): Promise<string> {
-    return bcrypt.hash(password, BCRYPT_ROUNDS);
+    return bcrypt.hash(password, this.rounds);
   }
 
   async register(input: RegisterInput): Promise<Session> {

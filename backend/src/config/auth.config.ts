@@ -19,6 +19,8 @@ const schema = object({
   REFRESH_TOKEN_TTL_DAYS: number().integer().min(1).max(365).default(30),
   PASSWORD_RESET_TTL_MINUTES: number().integer().min(5).max(1440).default(60),
   INVITATION_TTL_DAYS: number().integer().min(1).max(90).default(14),
+  // bcrypt cost: 12 by default (~0.25 s a hash here); tests may lower it to 4 for speed.
+  BCRYPT_ROUNDS: number().integer().min(4).max(15).default(12),
   SIGN_IN_LIMIT_PER_MINUTE: number().integer().min(1).max(100000).default(10),
   // A whole class often signs in at once from one studio network: the per-address limit is higher.
   SIGN_IN_IP_LIMIT_PER_MINUTE: number().integer().min(1).max(100000).default(120),
@@ -32,6 +34,7 @@ export default registerAs('auth', (): AuthConfig => {
     refreshTokenTtlDays: env.REFRESH_TOKEN_TTL_DAYS,
     passwordResetTtlMinutes: env.PASSWORD_RESET_TTL_MINUTES,
     invitationTtlDays: env.INVITATION_TTL_DAYS,
+    bcryptRounds: env.BCRYPT_ROUNDS,
     signInLimitPerMinute: env.SIGN_IN_LIMIT_PER_MINUTE,
     signInIpLimitPerMinute: env.SIGN_IN_IP_LIMIT_PER_MINUTE,
   };

@@ -21,6 +21,7 @@ export interface AuthConfig {
   refreshTokenTtlDays: number;
   passwordResetTtlMinutes: number;
   invitationTtlDays: number;
+  bcryptRounds: number;
   /** Sign-in attempts per e-mail address per minute. */
   signInLimitPerMinute: number;
   /** Sign-in attempts per client address per minute. */

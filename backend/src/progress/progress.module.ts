@@ -1,0 +1,11 @@
+import { Module } from '@nestjs/common';
+import { ClassesModule } from '../classes/classes.module';
+import { ProgressController } from './progress.controller';
+import { ProgressService } from './progress.service';
+
+@Module({
+  imports: [ClassesModule],
+  controllers: [ProgressController],
+  providers: [ProgressService],
+})
+export class ProgressModule {}

@@ -1,0 +1,21 @@
+import 'reflect-metadata';
+import { Logger } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import { AppModule } from './app.module';
+
+/**
+ * A grading worker: the same application without the HTTP listener, working the PostgreSQL
+ * queue. Run as many as you like, on any machine that reaches the database and the photo store
+ * (`npm run worker -w backend`; GRADING_CONCURRENCY jobs at once each).
+ */
+async function main(): Promise<void> {
+  process.env.GRADING_IN_SERVER = 'true';
+  const app = await NestFactory.createApplicationContext(AppModule, { logger: ['fatal', 'error', 'warn', 'log'] });
+  app.enableShutdownHooks();
+  Logger.log('Mixmark grading worker is working the queue', 'Worker');
+}
+
+main().catch((error: unknown) => {
+  console.error(`mixmark worker: could not start: ${error instanceof Error ? error.message : String(error)}`);
+  process.exit(1);
+});
