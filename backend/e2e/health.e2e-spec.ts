@@ -49,3 +49,22 @@ describe('GET /api/health (e2e, real PostgreSQL)', () => {
     expect(response.body).toMatchObject({ statusCode: 400, code: expect.any(String), message: expect.any(String) });
   });
 });
+
+describe('GET /api/docs (OpenAPI)', () => {
+  let app: INestApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('should describe every route of the API', async () => {
+    const response = await request(app.getHttpServer()).get('/api/docs/openapi.json').expect(200);
+    const paths = Object.keys(response.body.paths);
+    for (const path of ['/api/auth/sign-in', '/api/classes', '/api/drills', '/api/assignments', '/api/attempts', '/api/classes/{id}/gradebook.csv', '/api/admin/users']) {
+      expect(paths).toContain(path);
+    }
+    await request(app.getHttpServer()).get('/api/docs').expect(200);
+  });
+});

@@ -1,4 +1,5 @@
 import type { INestApplication } from '@nestjs/common';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 
@@ -25,5 +26,18 @@ export function configureApp(app: INestApplication): INestApplication {
   );
   app.use(cookieParser());
   app.enableShutdownHooks();
+  const document = SwaggerModule.createDocument(
+    app,
+    new DocumentBuilder()
+      .setTitle('Mixmark API')
+      .setDescription(
+        'Colour-mixing drills graded from photos. Every error has the shape { statusCode, code, message, details? }. ' +
+          'Sign in at POST /api/auth/sign-in; send the access token as a Bearer token; POST /api/auth/refresh renews it from the httpOnly cookie.',
+      )
+      .setVersion(process.env.npm_package_version ?? '0.1.0')
+      .addBearerAuth()
+      .build(),
+  );
+  SwaggerModule.setup('api/docs', app, document, { jsonDocumentUrl: 'api/docs/openapi.json' });
   return app;
 }
