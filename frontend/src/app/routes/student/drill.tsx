@@ -30,10 +30,28 @@ export default function StudentDrillRoute() {
         title={data.title}
         subtitle={`${kindWords[data.kind].name}: ${kindWords[data.kind].what}${assignmentId ? '' : ' (practice)'}`}
       />
+      {/* Phone first: the targets, then the upload, then the details and the photo guide. */}
       <Grid container spacing={3}>
         <Grid size={{ xs: 12, md: 7 }}>
+          <TargetSwatches targets={data.targets} />
+        </Grid>
+        <Grid size={{ xs: 12, md: 5 }}>
+          <Paper sx={{ p: 2.5 }}>
+            <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
+              Send your swatch
+            </Typography>
+            <Typography variant="body2" sx={{ mb: 2 }}>
+              Lay the printed reference card over your dry swatch so it shows through the window.
+            </Typography>
+            <PhotoUpload
+              drillId={data.id}
+              assignmentId={assignmentId}
+              onUploaded={(attempt) => navigate(paths.attempt.getHref(attempt.id))}
+            />
+          </Paper>
+        </Grid>
+        <Grid size={{ xs: 12, md: 7 }}>
           <Stack spacing={3}>
-            <TargetSwatches targets={data.targets} />
             {data.instructions && (
               <section>
                 <Typography variant="h3" component="h2" sx={{ mb: 1 }}>
@@ -51,24 +69,9 @@ export default function StudentDrillRoute() {
           </Stack>
         </Grid>
         <Grid size={{ xs: 12, md: 5 }}>
-          <Stack spacing={3}>
-            <Paper sx={{ p: 2.5 }}>
-              <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
-                Send your swatch
-              </Typography>
-              <Typography variant="body2" sx={{ mb: 2 }}>
-                Lay the printed reference card over your dry swatch so it shows through the window.
-              </Typography>
-              <PhotoUpload
-                drillId={data.id}
-                assignmentId={assignmentId}
-                onUploaded={(attempt) => navigate(paths.attempt.getHref(attempt.id))}
-              />
-            </Paper>
-            <Paper sx={{ p: 2.5 }}>
-              <PhotoGuide />
-            </Paper>
-          </Stack>
+          <Paper sx={{ p: 2.5 }}>
+            <PhotoGuide />
+          </Paper>
         </Grid>
       </Grid>
     </>

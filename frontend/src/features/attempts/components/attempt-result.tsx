@@ -72,7 +72,7 @@ export function AttemptResult({ attempt, onRetry }: { attempt: Attempt; onRetry?
           <PassBadge pass={attempt.pass} score={attempt.score} />
           {attempt.override && (
             <Typography>
-              Marked by your teacher{attempt.machine ? ` (the machine said ${attempt.machine.score}/100)` : ''}.
+              Marked by the teacher{attempt.machine ? ` (the machine said ${attempt.machine.score}/100)` : ''}.
             </Typography>
           )}
         </Stack>

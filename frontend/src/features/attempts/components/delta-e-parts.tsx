@@ -4,7 +4,12 @@ import TableCell from '@mui/material/TableCell';
 import TableRow from '@mui/material/TableRow';
 import type { TargetMark } from '@mixmark/common';
 
-const signed = (n: number, digits = 1) => `${n >= 0 ? '+' : '−'}${Math.abs(n).toFixed(digits)}`;
+/** A signed difference; one that rounds to zero is shown without a sign. */
+const signed = (n: number, digits = 1) => {
+  const text = Math.abs(n).toFixed(digits);
+  if (Number(text) === 0) return text;
+  return `${n > 0 ? '+' : '−'}${text}`;
+};
 
 /** ΔE00 split into its lightness, chroma and hue parts, each with what it means. */
 export function DeltaEParts({ mark }: { mark: TargetMark }) {
@@ -38,8 +43,15 @@ export function DeltaEParts({ mark }: { mark: TargetMark }) {
             ΔE00
           </TableCell>
           <TableCell sx={{ fontWeight: 800, fontVariantNumeric: 'tabular-nums' }}>{mark.deltaE.toFixed(1)}</TableCell>
+          <TableCell>{mark.pass ? 'within tolerance' : 'outside tolerance'}</TableCell>
+        </TableRow>
+        <TableRow>
+          <TableCell component="th" scope="row">
+            Temperature
+          </TableCell>
+          <TableCell sx={{ fontVariantNumeric: 'tabular-nums' }}>WC {signed(judgement.numbers.deltaWarmCool, 2)}</TableCell>
           <TableCell>
-            {judgement.temperature === 'same' ? 'same temperature' : judgement.temperature === 'warmer' ? 'too warm' : 'too cool'}
+            {judgement.temperature === 'same' ? 'same temperature' : judgement.temperature === 'warmer' ? 'warmer' : 'cooler'}
           </TableCell>
         </TableRow>
         {rows.map((row) => (

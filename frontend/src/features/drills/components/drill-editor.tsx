@@ -193,12 +193,12 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
           </Typography>
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
             <TextField
-              label="Passing ΔE00 (blank for the kind's default)"
+              label="Passing ΔE00"
               type="number"
               slotProps={{ htmlInput: { step: 0.5, min: 0.5, max: 50 } }}
               {...form.register('tolerance.deltaE', optionalNumber)}
               error={Boolean(errors.tolerance?.deltaE)}
-              helperText={errors.tolerance?.deltaE ? 'A number above 0, at most 50.' : 'Around 2 is close; 5 is a clear but near miss.'}
+              helperText={errors.tolerance?.deltaE ? 'A number above 0, at most 50.' : "Blank for the kind's default. Around 2 is close; 5 a near miss."}
               sx={{ minWidth: 280 }}
             />
             {extra && (

@@ -12,7 +12,7 @@ export function PigmentCautions({ pigments }: { pigments: string[] }) {
   const hazards = hazardousPigments(pigments);
   if (hazards.length === 0) return null;
   return (
-    <Alert severity="warning" icon={<WarningAmberOutlined />}>
+    <Alert severity="warning" role="note" icon={<WarningAmberOutlined />}>
       <AlertTitle>Handle with care</AlertTitle>
       <Typography variant="body2" sx={{ mb: 1 }}>
         {hazards.map((h) => `${h.code} (${h.compound})`).join(', ')}: common studio practice for these pigments:
