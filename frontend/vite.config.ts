@@ -9,7 +9,7 @@ export default defineConfig({
   plugins: [react()],
   resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
   server: { proxy: { '/api': { target: apiUrl, changeOrigin: false } } },
-  build: { outDir: 'dist', sourcemap: true, chunkSizeWarningLimit: 800 },
+  build: { outDir: 'dist', sourcemap: true, manifest: true, chunkSizeWarningLimit: 800 },
   test: {
     environment: 'jsdom',
     include: ['src/**/*.test.{ts,tsx}'],
