@@ -99,6 +99,7 @@ runMain(async () => {
     MIXMARK_TEST_OUTPUT: outDir,
     SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,
     OUTBOX_DIR: outboxDir,
+    STORAGE_DIR: join(outDir, 'photos'),
     FORCE_COLOR: process.env.CI ? '0' : (process.env.FORCE_COLOR ?? '1'),
   };
   const results = [];

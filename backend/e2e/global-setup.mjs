@@ -35,6 +35,8 @@ export default async function globalSetup() {
   process.env.NODE_ENV = 'test';
   process.env.LOG_LEVEL = 'warn';
   process.env.BCRYPT_ROUNDS ??= '4';
+  // Photos of the tests go to the test output, never into the start command's store.
+  process.env.STORAGE_DIR ??= join(rootDir, 'test-output', 'photos-backend');
 }
 
 // Drops and recreates the database so every run starts from nothing (pg is a backend dependency).

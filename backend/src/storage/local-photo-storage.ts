@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { mkdir, readFile, rename, rm, writeFile } from 'node:fs/promises';
 import { dirname, join, normalize, sep } from 'node:path';
 import { PhotoStorage } from './photo-storage';
@@ -11,8 +12,8 @@ export class LocalPhotoStorage extends PhotoStorage {
   async put(key: string, bytes: Buffer): Promise<void> {
     const path = this.pathOf(key);
     await mkdir(dirname(path), { recursive: true });
-    // Write then rename, so a reader never sees half a file.
-    const partial = `${path}.partial`;
+    // Write then rename, so a reader never sees half a file (and two writers never share one).
+    const partial = `${path}.${randomUUID()}.partial`;
     await writeFile(partial, bytes);
     await rename(partial, path);
   }

@@ -95,9 +95,9 @@ export async function seedTeaching(dataSource: DataSource, storage: PhotoStorage
       kind: demo.kind,
       steps: demo.kind === 'value-ladder' ? demo.targets.length : undefined,
       swatches: swatchesFor(demo, habit, f),
-      // Small photos keep the first start quick; the pipeline is the same at any size.
-      width: 800,
-      height: 600,
+      // Small photos keep the first start quick (phones take 12 MP; the pipeline is the same).
+      width: 1000,
+      height: 750,
       cardFraction: 0.45 + random() * 0.2,
       rotation: (random() - 0.5) * 40,
       tiltX: (random() - 0.5) * 16,
