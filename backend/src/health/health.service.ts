@@ -49,6 +49,11 @@ export class HealthService {
     }
   }
 
+  /** One indexed SELECT on the primary key of users. */
+  async ping(): Promise<void> {
+    await this.dataSource.query('SELECT 1 FROM users WHERE id = $1', ['00000000-0000-0000-0000-000000000000']);
+  }
+
   private withTimeout<T>(promise: Promise<T>, ms: number): Promise<T> {
     return new Promise<T>((resolve, reject) => {
       const timer = setTimeout(() => reject(new Error(`timed out after ${ms} ms`)), ms);

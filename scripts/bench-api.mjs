@@ -1,0 +1,91 @@
+// `npm run bench:api -w backend`: requests/s and latency of the API on 127.0.0.1 with autocannon,
+// the authenticated assignments list and a 30-student gradebook beside the floor (a bare route
+// with one indexed SELECT), all in the same run against the real server and PostgreSQL.
+import { spawn } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { buildIfStale } from './lib/builds.mjs';
+import { runMain } from './lib/errors.mjs';
+import { waitForOk } from './lib/http.mjs';
+import { freePort } from './lib/ports.mjs';
+import { run } from './lib/proc.mjs';
+import { rootDir } from './lib/project.mjs';
+import { startTestCluster } from './lib/test-cluster.mjs';
+
+const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
+const CONNECTIONS = 32;
+
+runMain(async () => {
+  const { default: autocannon } = await import('autocannon');
+  const { default: pg } = await import('pg');
+  await buildIfStale(rootDir, ['common', 'backend'], { log: (line) => console.error(line) });
+  const testCluster = await startTestCluster();
+  const storage = mkdtempSync(join(tmpdir(), 'mixmark-bench-'));
+  let server;
+  try {
+    await testCluster.cluster.ensureDatabase('bench');
+    const port = await freePort();
+    const env = {
+      ...process.env, NODE_ENV: 'production', LOG_LEVEL: 'warn', DATABASE_URL: testCluster.cluster.url('bench'), PORT: String(port),
+      JWT_SECRET: 'bench-secret-bench-secret-bench-secret-0001', STORAGE_DIR: storage, SMTP_URL: 'smtp://127.0.0.1:9', GRADING_IN_SERVER: 'false',
+      DATABASE_POOL_SIZE: '16', SIGN_IN_LIMIT_PER_MINUTE: '100000', SIGN_IN_IP_LIMIT_PER_MINUTE: '100000',
+    };
+    await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], { env, capture: true });
+    server = spawn(process.execPath, [join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });
+    const base = `http://127.0.0.1:${port}`;
+    if (!(await waitForOk(`${base}/api/health`, { child: server }))) throw new Error('the server did not start');
+
+    // A teacher with a class of 30 students, 12 assignments and 4 graded attempts each.
+    const post = async (path, body, token) => {
+      const response = await fetch(`${base}${path}`, { method: 'POST', headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) }, body: JSON.stringify(body) });
+      if (!response.ok) throw new Error(`${path}: ${response.status} ${await response.text()}`);
+      return response.json();
+    };
+    const teacher = await post('/api/auth/register', { email: 'bench-teacher@bench.test', password: 'bench password 1', displayName: 'Bench Teacher', role: 'teacher' });
+    const klass = await post('/api/classes', { name: 'Bench class' }, teacher.accessToken);
+    const drill = await post('/api/drills', { title: 'Bench grey', kind: 'neutral', targets: [{ lab: { L: 50, a: 0, b: 0 } }] }, teacher.accessToken);
+    const db = new pg.Client({ connectionString: env.DATABASE_URL });
+    await db.connect();
+    await db.query(`INSERT INTO users (email, display_name, role, password_hash) SELECT 'student' || i || '@bench.test', 'Student ' || i, 'student', 'x' FROM generate_series(1, 30) i`);
+    await db.query(`INSERT INTO class_members (class_id, student_id) SELECT $1, id FROM users WHERE email LIKE 'student%@bench.test'`, [klass.id]);
+    for (let i = 0; i < 12; i += 1) await post('/api/assignments', { classId: klass.id, drillId: drill.id, dueAt: new Date(Date.now() + (i - 6) * 86400000).toISOString() }, teacher.accessToken);
+    await db.query(
+      `INSERT INTO attempts (student_id, drill_id, assignment_id, state, photo_key, photo_bytes, score, pass, graded_at, created_at)
+       SELECT m.student_id, a.drill_id, a.id, 'graded', 'bench', 1, (random() * 100)::int, random() > 0.4, now(), now() - (k || ' days')::interval
+         FROM class_members m JOIN assignments a ON a.class_id = m.class_id CROSS JOIN generate_series(1, 4) k WHERE m.class_id = $1`,
+      [klass.id],
+    );
+    await db.end();
+
+    const auth = { authorization: `Bearer ${teacher.accessToken}` };
+    const cases = [
+      { name: 'floor: one indexed SELECT (GET /api/health/db)', path: '/api/health/db', headers: {} },
+      { name: 'assignments list, signed in (GET /api/assignments)', path: '/api/assignments', headers: auth },
+      { name: 'gradebook, 30 students x 12 (GET /api/classes/:id/gradebook)', path: `/api/classes/${klass.id}/gradebook`, headers: auth },
+    ];
+    const results = [];
+    for (const c of cases) {
+      await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: 4, duration: 1 }); // warm up
+      const r = await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: CONNECTIONS, duration: DURATION });
+      if (r.non2xx > 0) throw new Error(`${c.path} answered ${r.non2xx} non-2xx responses`);
+      results.push({ ...c, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99 });
+    }
+    const floor = results[0].rps;
+    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s each (one server process, NODE_ENV=production)\n`);
+    console.log('route'.padEnd(64) + 'req/s'.padStart(9) + 'vs floor'.padStart(10) + 'p50 ms'.padStart(9) + 'p99 ms'.padStart(9));
+    for (const r of results) {
+      console.log(r.name.padEnd(64) + r.rps.toFixed(0).padStart(9) + `${((100 * r.rps) / floor).toFixed(0)} %`.padStart(10) + String(r.p50).padStart(9) + String(r.p99).padStart(9));
+    }
+    console.log('\nAim: the list route at least 70 % of the floor with p99 under 50 ms.');
+  } finally {
+    if (server && server.exitCode === null) {
+      await new Promise((resolve) => {
+        server.once('exit', resolve);
+        server.kill('SIGTERM');
+      });
+    }
+    await testCluster.remove();
+    rmSync(storage, { recursive: true, force: true });
+  }
+});
