@@ -15,6 +15,9 @@ async function shootBoth(page: Page, name: string) {
   for (const viewport of Object.values(viewports)) {
     await page.setViewportSize(viewport);
     await page.waitForTimeout(150);
+    // Nothing may push the page wider than the screen (wide tables scroll inside their box).
+    const scrollWidth = await page.evaluate(() => document.documentElement.scrollWidth);
+    expect(scrollWidth, `${name} at ${viewport.width} px`).toBeLessThanOrEqual(viewport.width);
     await screenshot(page, outputDir, name);
   }
   if (before) await page.setViewportSize(before);

@@ -29,5 +29,8 @@ export const theme = createTheme({
     MuiAppBar: { defaultProps: { elevation: 0, color: 'inherit' } },
     MuiPaper: { defaultProps: { variant: 'outlined' } },
     MuiButton: { defaultProps: { disableElevation: true } },
+    // A wide table scrolls inside its box; being positioned, the box also holds the
+    // screen-reader-only headers (position: absolute) that would otherwise widen the page.
+    MuiTableContainer: { styleOverrides: { root: { position: 'relative' } } },
   },
 });

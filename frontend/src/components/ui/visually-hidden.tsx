@@ -6,7 +6,8 @@ export function VisuallyHidden({ children }: { children: ReactNode }) {
   return (
     <Box
       component="span"
-      sx={{ position: 'absolute', width: 1, height: 1, p: 0, m: -1, overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap', border: 0 }}
+      // Pixel units on purpose: in MUI's sx a bare 1 would mean 100 %.
+      sx={{ position: 'absolute', width: '1px', height: '1px', p: 0, m: '-1px', overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap', border: 0 }}
     >
       {children}
     </Box>
