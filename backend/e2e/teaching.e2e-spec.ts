@@ -157,3 +157,34 @@ describe('classes, invitations, drills and assignments (e2e, real PostgreSQL and
     await request(http).post('/api/auth/sign-in').send({ email: student.email, password: testPassword }).expect(401);
   });
 });
+
+describe('reference cards of drills (e2e)', () => {
+  let app: INestApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('should serve the card of a visible drill as a true-size PDF and as a PNG, and hide others', async () => {
+    const http = app.getHttpServer();
+    const teacher = await registerAccount(app, 'teacher');
+    const stranger = await registerAccount(app, 'teacher');
+    const drill = await request(http)
+      .post('/api/drills')
+      .set(teacher.auth)
+      .send({ title: 'Ladder card', kind: 'value-ladder', targets: [90, 70, 50, 30].map((L) => ({ lab: { L, a: 0, b: 0 } })) })
+      .expect(201);
+    const pdf = await request(http).get(`/api/drills/${drill.body.id}/card.pdf?paper=letter`).set(teacher.auth).buffer(true).expect(200);
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+    expect(pdf.headers['content-disposition']).toContain('mixmark-card-value-ladder-letter.pdf');
+    const text = Buffer.from(pdf.body).toString('latin1');
+    expect(text.startsWith('%PDF-')).toBe(true);
+    // US Letter is 612 × 792 points (ANSI/ASME Y14.1).
+    expect(text).toMatch(/\/MediaBox \[0 0 612 792\]/);
+    const png = await request(http).get(`/api/drills/${drill.body.id}/card.png`).set(teacher.auth).buffer(true).expect(200);
+    expect(Buffer.from(png.body).subarray(1, 4).toString()).toBe('PNG');
+    await request(http).get(`/api/drills/${drill.body.id}/card.pdf`).set(stranger.auth).expect(404);
+  });
+});

@@ -10,6 +10,7 @@ import { RequestLoggerMiddleware } from './common/middleware/request-logger.midd
 import { AssignmentsModule } from './assignments/assignments.module';
 import { AttemptsModule } from './attempts/attempts.module';
 import { AuthModule } from './auth/auth.module';
+import { CardsModule } from './cards/cards.module';
 import { ClassesModule } from './classes/classes.module';
 import appConfig from './config/app.config';
 import authConfig from './config/auth.config';
@@ -56,6 +57,7 @@ import { StorageModule } from './storage/storage.module';
     AssignmentsModule,
     AttemptsModule,
     ProgressModule,
+    CardsModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })
