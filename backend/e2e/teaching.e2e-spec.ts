@@ -188,3 +188,30 @@ describe('reference cards of drills (e2e)', () => {
     await request(http).get(`/api/drills/${drill.body.id}/card.pdf`).set(stranger.auth).expect(404);
   });
 });
+
+describe('my palette (e2e)', () => {
+  let app: INestApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('should keep a user\'s paints with safety notes for hazardous pigments, and nobody else\'s', async () => {
+    const http = app.getHttpServer();
+    const painter = await registerAccount(app, 'student');
+    const other = await registerAccount(app, 'student');
+    await request(http).post('/api/palette/paints').set(painter.auth).send({ name: 'Deep blue', pigments: ['pb29'], opacity: 'transparent', granulating: true }).expect(201);
+    const red = await request(http).post('/api/palette/paints').set(painter.auth).send({ name: 'Warm red', pigments: ['PR 108'], staining: 'medium' }).expect(201);
+    expect(red.body.safety).toEqual([expect.objectContaining({ code: 'PR108', elements: ['cadmium'] })]);
+    const palette = await request(http).get('/api/palette').set(painter.auth).expect(200);
+    expect(palette.body.paints.map((p: { name: string }) => p.name)).toEqual(['Deep blue', 'Warm red']);
+    expect(palette.body.cautions.join(' ')).toMatch(/label/);
+    const bad = await request(http).post('/api/palette/paints').set(painter.auth).send({ name: 'x', pigments: ['blue'] }).expect(400);
+    expect(bad.body.details).toEqual({ 'pigments[0]': 'pigment' });
+    await request(http).delete(`/api/palette/paints/${red.body.id}`).set(other.auth).expect(404);
+    await request(http).delete(`/api/palette/paints/${red.body.id}`).set(painter.auth).expect(204);
+    expect((await request(http).get('/api/palette').set(other.auth).expect(200)).body).toEqual({ paints: [], cautions: [] });
+  });
+});

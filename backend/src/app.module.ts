@@ -23,6 +23,7 @@ import { DrillsModule } from './drills/drills.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
+import { PalettesModule } from './palettes/palettes.module';
 import { ProgressModule } from './progress/progress.module';
 import { StorageModule } from './storage/storage.module';
 
@@ -58,6 +59,7 @@ import { StorageModule } from './storage/storage.module';
     AttemptsModule,
     ProgressModule,
     CardsModule,
+    PalettesModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

@@ -7,3 +7,4 @@ export * from './grading/index.js';
 export * from './types/index.js';
 export * from './types/api-error.js';
 export * from './schemas/index.js';
+export * from './safety/pigment-safety.js';

@@ -5,3 +5,4 @@ export * from './class.schema.js';
 export * from './drill.schema.js';
 export * from './assignment.schema.js';
 export * from './attempt.schema.js';
+export * from './paint.schema.js';
