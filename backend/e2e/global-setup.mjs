@@ -6,7 +6,7 @@ import { buildIfStale } from '../../scripts/lib/builds.mjs';
 import { run } from '../../scripts/lib/proc.mjs';
 import { rootDir } from '../../scripts/lib/project.mjs';
 import { startFakeSmtp } from '../../scripts/lib/fake-smtp.mjs';
-import { startTestCluster } from '../../scripts/lib/test-cluster.mjs';
+import { recreateDatabase, startTestCluster } from '../../scripts/lib/test-cluster.mjs';
 
 export default async function globalSetup() {
   let baseUrl = process.env.MIXMARK_TEST_PG_URL;
@@ -23,8 +23,7 @@ export default async function globalSetup() {
     process.env.SMTP_URL = `smtp://127.0.0.1:${smtp.port}`;
     process.env.OUTBOX_DIR = dir;
   }
-  const databaseUrl = baseUrl.replace(/\/[^/]*$/, '/mixmark_backend_e2e');
-  await run(process.execPath, ['-e', createDatabaseScript, baseUrl, 'mixmark_backend_e2e'], { capture: true, cwd: join(rootDir, 'backend'), label: 'create the e2e database' });
+  const databaseUrl = await recreateDatabase(baseUrl, 'mixmark_backend_e2e');
   await buildIfStale(rootDir, ['common', 'backend'], { log: () => {} });
   await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], {
     capture: true,
@@ -39,14 +38,3 @@ export default async function globalSetup() {
   process.env.STORAGE_DIR ??= join(rootDir, 'test-output', 'photos-backend');
 }
 
-// Drops and recreates the database so every run starts from nothing (pg is a backend dependency).
-const createDatabaseScript = `
-const { Client } = require('pg');
-const [url, name] = process.argv.slice(1);
-const client = new Client({ connectionString: url });
-client.connect()
-  .then(() => client.query('DROP DATABASE IF EXISTS "' + name + '" WITH (FORCE)'))
-  .then(() => client.query('CREATE DATABASE "' + name + '"'))
-  .then(() => client.end())
-  .catch((error) => { console.error(error.message); process.exit(1); });
-`;

@@ -7,7 +7,7 @@ import { freePort } from '../../scripts/lib/ports.mjs';
 import { run } from '../../scripts/lib/proc.mjs';
 import { rootDir } from '../../scripts/lib/project.mjs';
 import { startFakeSmtp } from '../../scripts/lib/fake-smtp.mjs';
-import { startTestCluster } from '../../scripts/lib/test-cluster.mjs';
+import { recreateDatabase, startTestCluster } from '../../scripts/lib/test-cluster.mjs';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -29,9 +29,9 @@ export default async function setup(project: TestProject) {
   }
   await buildIfStale(rootDir, ['common', 'backend', 'frontend'], { log: () => {} });
   const database = 'mixmark_browser_e2e';
-  const databaseUrl = baseUrl.replace(/\/[^/]*$/, `/${database}`);
+
   const backend = join(rootDir, 'backend');
-  await run(process.execPath, ['-e', recreateDatabase, baseUrl, database], { cwd: backend, capture: true, label: 'create the browser-test database' });
+  const databaseUrl = await recreateDatabase(baseUrl, database);
 
   let ownSmtp: Awaited<ReturnType<typeof startFakeSmtp>> | undefined;
   if (!process.env.SMTP_URL) {
@@ -75,13 +75,3 @@ export default async function setup(project: TestProject) {
   };
 }
 
-const recreateDatabase = `
-const { Client } = require('pg');
-const [url, name] = process.argv.slice(1);
-const client = new Client({ connectionString: url });
-client.connect()
-  .then(() => client.query('DROP DATABASE IF EXISTS "' + name + '" WITH (FORCE)'))
-  .then(() => client.query('CREATE DATABASE "' + name + '"'))
-  .then(() => client.end())
-  .catch((error) => { console.error(error.message); process.exit(1); });
-`;

@@ -23,3 +23,21 @@ export async function startTestCluster({ log = () => {} } = {}) {
     },
   };
 }
+
+/**
+ * Drops (closing its connections) and creates a database on the server at `serverUrl`, so a
+ * suite starts from nothing. `pg` is installed by then (the bootstrap ran first).
+ */
+export async function recreateDatabase(serverUrl, name) {
+  if (!/^[a-z_][a-z0-9_]*$/.test(name)) throw new Error(`database name "${name}" must be lower-case letters, digits and _`);
+  const { default: pg } = await import('pg');
+  const client = new pg.Client({ connectionString: serverUrl });
+  await client.connect();
+  try {
+    await client.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`);
+    await client.query(`CREATE DATABASE "${name}"`);
+  } finally {
+    await client.end();
+  }
+  return serverUrl.replace(/\/[^/]*$/, `/${name}`);
+}

@@ -1,27 +1,7 @@
-import type { Mark, Reading } from '@mixmark/common';
-import type { Attempt, AttemptState, QualityReport } from './entities/attempt.entity';
+import type { AttemptView } from '@mixmark/common';
+import type { Attempt } from './entities/attempt.entity';
 
-/** An attempt as the API shows it: the effective mark, and the machine's and teacher's apart. */
-export interface AttemptView {
-  id: string;
-  drill: { id: string; title: string; kind: string };
-  assignmentId: string | null;
-  student: { id: string; displayName: string };
-  state: AttemptState;
-  quality: QualityReport;
-  failureReason: string | null;
-  readings: Reading[] | null;
-  mark: Mark | null;
-  /** The teacher's score and pass when overridden, else the machine's. */
-  score: number | null;
-  pass: boolean | null;
-  machine: { score: number; pass: boolean } | null;
-  override: { score: number; pass: boolean; comment: string; by: string | null; at: Date } | null;
-  photoBytes: number;
-  hasOverlay: boolean;
-  createdAt: Date;
-  gradedAt: Date | null;
-}
+export type { AttemptView };
 
 export function toAttemptView(attempt: Attempt, drill: { id: string; title: string; kind: string }, student: { id: string; displayName: string }): AttemptView {
   const overridden = attempt.overrideScore !== null && attempt.overridePass !== null;

@@ -1,13 +1,8 @@
-import type { Mark, Reading } from '@mixmark/common';
+import type { AttemptState, Mark, QualityReport, Reading } from '@mixmark/common';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
-export const attemptStates = ['queued', 'measuring', 'graded', 'needs-retake', 'failed'] as const;
-export type AttemptState = (typeof attemptStates)[number];
-
-export interface QualityReport {
-  errors: { code: string; message: string }[];
-  warnings: { code: string; message: string }[];
-}
+export const attemptStates = ['queued', 'measuring', 'graded', 'needs-retake', 'failed'] as const satisfies readonly AttemptState[];
+export type { AttemptState, QualityReport };
 
 /** One photo a student submitted for a drill, its readings and its mark. */
 @Entity({ name: 'attempts' })
