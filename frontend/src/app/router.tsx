@@ -35,17 +35,22 @@ export const routes: RouteObject[] = [
           lazyRoute(paths.student.library.path, () => import('./routes/student/library')),
           lazyRoute(paths.student.drill.path, () => import('./routes/student/drill')),
           lazyRoute(paths.student.history.path, () => import('./routes/student/history')),
+          lazyRoute(paths.student.progress.path, () => import('./routes/student/progress')),
         ],
       },
       {
         element: <RequireRole roles={['student', 'teacher', 'admin']} />,
-        children: [lazyRoute(paths.attempt.path, () => import('./routes/attempt'))],
+        children: [
+          lazyRoute(paths.attempt.path, () => import('./routes/attempt')),
+        ],
       },
       {
         element: <RequireRole roles={['teacher']} />,
         children: [
           lazyRoute(paths.teacher.dashboard.path, () => import('./routes/teacher/dashboard')),
           lazyRoute(paths.teacher.class.path, () => import('./routes/teacher/class')),
+          lazyRoute(paths.teacher.gradebook.path, () => import('./routes/teacher/gradebook')),
+          lazyRoute(paths.teacher.studentProgress.path, () => import('./routes/teacher/student-progress')),
           lazyRoute(paths.teacher.drills.path, () => import('./routes/teacher/drills')),
           lazyRoute(paths.teacher.newDrill.path, () => import('./routes/teacher/drill-editor')),
           lazyRoute(paths.teacher.editDrill.path, () => import('./routes/teacher/drill-editor')),

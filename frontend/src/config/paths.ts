@@ -38,12 +38,22 @@ export const paths = {
         withQuery(`/student/drills/${drillId}`, { assignmentId }),
     },
     history: { path: '/student/history', getHref: () => '/student/history' },
+    progress: { path: '/student/progress', getHref: () => '/student/progress' },
   },
+  palette: { path: '/palette', getHref: () => '/palette' },
   /** One address for an attempt (the mail links to it): the result for a student, review for a teacher. */
   attempt: { path: '/attempts/:attemptId', getHref: (attemptId: string) => `/attempts/${attemptId}` },
   teacher: {
     dashboard: { path: '/teacher', getHref: () => '/teacher' },
     class: { path: '/teacher/classes/:classId', getHref: (classId: string) => `/teacher/classes/${classId}` },
+    gradebook: {
+      path: '/teacher/classes/:classId/gradebook',
+      getHref: (classId: string) => `/teacher/classes/${classId}/gradebook`,
+    },
+    studentProgress: {
+      path: '/teacher/students/:studentId/progress',
+      getHref: (studentId: string) => `/teacher/students/${studentId}/progress`,
+    },
     drills: { path: '/teacher/drills', getHref: () => '/teacher/drills' },
     newDrill: { path: '/teacher/drills/new', getHref: () => '/teacher/drills/new' },
     editDrill: {

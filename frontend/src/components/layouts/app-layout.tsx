@@ -17,14 +17,20 @@ const navByRole: Record<UserRole, { label: string; href: string }[]> = {
     { label: 'Assignments', href: paths.student.assignments.getHref() },
     { label: 'Practice', href: paths.student.library.getHref() },
     { label: 'History', href: paths.student.history.getHref() },
+    { label: 'Progress', href: paths.student.progress.getHref() },
+    { label: 'My palette', href: paths.palette.getHref() },
     { label: 'Join a class', href: paths.student.join.getHref() },
   ],
   teacher: [
     { label: 'Dashboard', href: paths.teacher.dashboard.getHref() },
     { label: 'Drills', href: paths.teacher.drills.getHref() },
     { label: 'Assign', href: paths.teacher.assign.getHref() },
+    { label: 'My palette', href: paths.palette.getHref() },
   ],
-  admin: [{ label: 'Users', href: paths.admin.users.getHref() }],
+  admin: [
+    { label: 'Users', href: paths.admin.users.getHref() },
+    { label: 'My palette', href: paths.palette.getHref() },
+  ],
 };
 
 function RoleNav({ role }: { role: UserRole }) {

@@ -22,3 +22,19 @@ export type AssignmentView = {
   /** For the teacher: how many students stand where. */
   counts?: Record<AssignmentStatus, number>;
 };
+
+export type GradebookCell = {
+  status: AssignmentStatus;
+  attempts: number;
+  latestScore: number | null;
+  bestScore: number | null;
+  latestAttemptId: string | null;
+};
+
+/** A class's marks: one row per student, one column per assignment. */
+export type Gradebook = {
+  classId: string;
+  className: string;
+  assignments: { id: string; drillTitle: string; kind: string; dueAt: string }[];
+  students: { id: string; displayName: string; email: string; cells: Record<string, GradebookCell> }[];
+};

@@ -14,6 +14,15 @@ import { ClassCodePanel } from '@/features/classes/components/class-code-panel';
 import { ClassSettings } from '@/features/classes/components/class-settings';
 import { InviteForm } from '@/features/classes/components/invite-form';
 import { RosterTable } from '@/features/classes/components/roster-table';
+import { useClassProgress } from '@/features/progress/api/get-class-progress';
+import { ProgressSummary } from '@/features/progress/components/progress-summary';
+
+function ClassProgress({ classId }: { classId: string }) {
+  const progress = useClassProgress({ id: classId });
+  if (progress.isPending) return <Loading label="Loading the class's progress…" />;
+  if (progress.isError) return <ErrorAlert error={progress.error} onRetry={() => progress.refetch()} />;
+  return <ProgressSummary progress={progress.data} who="class" />;
+}
 
 export default function TeacherClassRoute() {
   const { classId = '' } = useParams();
@@ -27,9 +36,14 @@ export default function TeacherClassRoute() {
         title={data.name}
         subtitle={`${data.studentCount} ${data.studentCount === 1 ? 'student' : 'students'}${data.archived ? ' · archived' : ''}`}
         actions={
-          <Button variant="contained" component={RouterLink} to={paths.teacher.assign.getHref({ classId: data.id })}>
-            Assign a drill
-          </Button>
+          <>
+            <Button variant="outlined" component={RouterLink} to={paths.teacher.gradebook.getHref(data.id)}>
+              Gradebook
+            </Button>
+            <Button variant="contained" component={RouterLink} to={paths.teacher.assign.getHref({ classId: data.id })}>
+              Assign a drill
+            </Button>
+          </>
         }
       />
       <Grid container spacing={3}>
@@ -45,7 +59,13 @@ export default function TeacherClassRoute() {
               <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
                 Students
               </Typography>
-              <RosterTable classId={data.id} />
+              <RosterTable classId={data.id} progressHref={paths.teacher.studentProgress.getHref} />
+            </section>
+            <section>
+              <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
+                Class progress
+              </Typography>
+              <ClassProgress classId={data.id} />
             </section>
           </Stack>
         </Grid>

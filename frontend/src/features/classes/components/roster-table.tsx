@@ -1,4 +1,6 @@
 import Button from '@mui/material/Button';
+import Link from '@mui/material/Link';
+import { Link as RouterLink } from 'react-router-dom';
 import Table from '@mui/material/Table';
 import TableBody from '@mui/material/TableBody';
 import TableCell from '@mui/material/TableCell';
@@ -13,7 +15,8 @@ import { Loading } from '@/components/ui/loading';
 import { useRemoveStudent } from '../api/remove-student';
 import { useRoster } from '../api/get-roster';
 
-export function RosterTable({ classId }: { classId: string }) {
+/** The class's students; `progressHref` links each name to that student's progress. */
+export function RosterTable({ classId, progressHref }: { classId: string; progressHref?: (studentId: string) => string }) {
   const roster = useRoster({ classId });
   const remove = useRemoveStudent({ classId });
   if (roster.isPending) return <Loading label="Loading the roster…" />;
@@ -39,7 +42,15 @@ export function RosterTable({ classId }: { classId: string }) {
           <TableBody>
             {roster.data.map((student) => (
               <TableRow key={student.id}>
-                <TableCell>{student.displayName}</TableCell>
+                <TableCell>
+                  {progressHref ? (
+                    <Link component={RouterLink} to={progressHref(student.id)} aria-label={`${student.displayName}: progress`}>
+                      {student.displayName}
+                    </Link>
+                  ) : (
+                    student.displayName
+                  )}
+                </TableCell>
                 <TableCell>{student.email}</TableCell>
                 <TableCell>{new Date(student.joinedAt).toLocaleDateString()}</TableCell>
                 <TableCell align="right">

@@ -1,0 +1,16 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import type { Progress } from '../types';
+
+/** The signed-in student's progress by week. */
+export async function getMyProgress(): Promise<Progress> {
+  const { data } = await api.get<Progress>('/progress/me');
+  return data;
+}
+
+export const getMyProgressQueryOptions = () =>
+  queryOptions({ queryKey: ['progress', 'me'], queryFn: getMyProgress });
+
+export function useMyProgress({ queryConfig }: { queryConfig?: Partial<ReturnType<typeof getMyProgressQueryOptions>> } = {}) {
+  return useQuery({ ...getMyProgressQueryOptions(), ...queryConfig });
+}
