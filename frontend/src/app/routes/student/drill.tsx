@@ -11,6 +11,7 @@ import { PhotoUpload } from '@/features/attempts/components/photo-upload';
 import { useDrill } from '@/features/drills/api/get-drill';
 import { PaletteList } from '@/features/drills/components/palette-list';
 import { PhotoGuide } from '@/features/drills/components/photo-guide';
+import { ReferenceCard } from '@/features/drills/components/reference-card';
 import { TargetSwatches } from '@/features/drills/components/target-swatches';
 import { kindWords } from '@/features/drills/types';
 
@@ -69,9 +70,14 @@ export default function StudentDrillRoute() {
           </Stack>
         </Grid>
         <Grid size={{ xs: 12, md: 5 }}>
-          <Paper sx={{ p: 2.5 }}>
-            <PhotoGuide />
-          </Paper>
+          <Stack spacing={3}>
+            <Paper sx={{ p: 2.5 }}>
+              <ReferenceCard drillId={data.id} />
+            </Paper>
+            <Paper sx={{ p: 2.5 }}>
+              <PhotoGuide />
+            </Paper>
+          </Stack>
         </Grid>
       </Grid>
     </>

@@ -4,7 +4,9 @@ import { Loading } from '@/components/ui/loading';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useDrill } from '@/features/drills/api/get-drill';
+import Paper from '@mui/material/Paper';
 import { DrillEditor } from '@/features/drills/components/drill-editor';
+import { ReferenceCard } from '@/features/drills/components/reference-card';
 
 /** The drill editor's own chunk: loaded only when a teacher opens it. */
 export default function DrillEditorRoute() {
@@ -27,6 +29,9 @@ export default function DrillEditorRoute() {
     <>
       <PageHeader title={`Edit: ${drill.data.title}`} />
       <DrillEditor key={drill.data.id} drill={drill.data} onSaved={onSaved} />
+      <Paper sx={{ p: 2.5, mt: 3 }}>
+        <ReferenceCard drillId={drill.data.id} />
+      </Paper>
     </>
   );
 }
