@@ -1,0 +1,102 @@
+/**
+ * Speed and memory of the photo measurement (issue 4), beside sharp's own decode-and-shrink
+ * of the same file to the same working size, measured in the same run as the floor:
+ *   npm run bench:measure -w backend
+ * The photos are made here with sharp (the card PNG, turned and placed on a noisy table);
+ * the test scene generator lives under testing/ and is not part of the build.
+ */
+import sharp from 'sharp';
+import { buildCardLayout } from '../../cards/card-layout';
+import { renderCardPng } from '../../cards/render-card-png';
+import { measurePhoto } from '../measure-photo';
+
+async function photo(width: number, height: number): Promise<Buffer> {
+  const { png } = await renderCardPng(buildCardLayout({ kind: 'value-ladder', steps: 5 }), 300);
+  const card = await sharp(
+    await sharp(png)
+      .resize(Math.round(0.55 * width))
+      .toBuffer(),
+  )
+    .flatten({ background: '#8a5a40' })
+    .rotate(17, { background: '#50453a' })
+    .toBuffer();
+  const meta = await sharp(card).metadata();
+  const noise = await sharp({
+    create: {
+      width,
+      height,
+      channels: 3,
+      background: '#000',
+      noise: { type: 'gaussian', mean: 90, sigma: 12 },
+    },
+  })
+    .png()
+    .toBuffer();
+  return sharp(noise)
+    .composite([
+      {
+        input: card,
+        left: Math.round((width - meta.width!) / 2),
+        top: Math.round((height - meta.height!) / 2),
+      },
+    ])
+    .linear(0.85, 12)
+    .jpeg({ quality: 90 })
+    .toBuffer();
+}
+
+const median = (values: number[]): number =>
+  [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
+
+async function bench(label: string, width: number, height: number, runs: number): Promise<void> {
+  const jpeg = await photo(width, height);
+  const floors: number[] = [];
+  const totals: number[] = [];
+  const shares = { decode: 0, detect: 0, fit: 0, sample: 0 };
+  let ok = true;
+  const gc = (globalThis as { gc?: () => void }).gc;
+  for (let i = 0; i < runs; i++) {
+    gc?.();
+    let factor = 1;
+    while (Math.max(width, height) / factor > 2048) factor *= 2;
+    let t = performance.now();
+    await sharp(jpeg)
+      .resize(Math.round(width / factor), Math.round(height / factor), {
+        fit: 'fill',
+        kernel: 'linear',
+      })
+      .raw()
+      .toBuffer();
+    floors.push(performance.now() - t);
+    t = performance.now();
+    const { result, timings } = await measurePhoto(jpeg);
+    totals.push(performance.now() - t);
+    ok &&= result.ok;
+    for (const key of Object.keys(shares) as (keyof typeof shares)[])
+      shares[key] += timings[key] / runs;
+  }
+  const total = median(totals);
+  const floor = median(floors);
+  const sum = shares.decode + shares.detect + shares.fit + shares.sample;
+  const pct = (v: number): string => `${Math.round((100 * v) / sum)} %`;
+  console.log(
+    `${label} (${width}×${height}, ${(jpeg.length / 1e6).toFixed(1)} MB JPEG, measured ${ok ? 'ok' : 'WITH ERRORS'}): ` +
+      `median ${total.toFixed(0)} ms end to end; floor (sharp decode + shrink) ${floor.toFixed(0)} ms; ratio ${(total / floor).toFixed(2)}×; ` +
+      `shares: decode ${pct(shares.decode)}, detect ${pct(shares.detect)}, fit ${pct(shares.fit)}, sample ${pct(shares.sample)}`,
+  );
+}
+
+async function main(): Promise<void> {
+  sharp.concurrency(1);
+  const before = process.memoryUsage().rss;
+  await bench('12 MP', 4032, 3024, 7);
+  await bench('48 MP', 8064, 6048, 3);
+  console.log(
+    `peak RSS of the process ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (started at ${(before / 1048576).toFixed(0)} MB; includes making the test photos); one libvips thread`,
+  );
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
