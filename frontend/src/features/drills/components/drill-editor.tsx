@@ -4,6 +4,8 @@ import {
   drillKinds,
   labToHex,
   labToLch,
+  pigmentCautions,
+  pigmentSafety,
   targetCountByKind,
   type CreateDrillInput,
   type DrillKind,
@@ -24,8 +26,8 @@ import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
 import { useCreateDrill } from '../api/create-drill';
 import { useUpdateDrill } from '../api/update-drill';
 import { kindWords, type Drill } from '../types';
-import { PigmentCautions } from './palette-list';
-import { PigmentsField } from './pigments-field';
+import { PigmentCautions } from '@/components/colour/pigment-cautions';
+import { PigmentsField } from '@/components/colour/pigments-field';
 import { TargetField } from './target-field';
 
 const optionalNumber = { setValueAs: (v: string | number | undefined) => (v === '' || v === undefined ? undefined : Number(v)) };
@@ -258,7 +260,7 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
           >
             Add a paint
           </Button>
-          <PigmentCautions pigments={paints.flatMap((paint) => paint?.pigments ?? [])} />
+          <PigmentCautions notes={pigmentSafety(paints.flatMap((paint) => paint?.pigments ?? []))} cautions={pigmentCautions} />
         </Stack>
 
         <Controller

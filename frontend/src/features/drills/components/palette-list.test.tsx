@@ -7,8 +7,8 @@ describe('PaletteList', () => {
     render(<PaletteList palette={[{ name: 'Deep yellow', pigments: ['PY35'] }, { name: 'Ultramarine', pigments: ['PB29'] }]} />);
     expect(screen.getByText('Handle with care')).toBeInTheDocument();
     expect(screen.getByText(/PY35 \(cadmium\)/)).toBeInTheDocument();
-    expect(screen.getByText('Do not point brushes with your mouth.')).toBeInTheDocument();
-    expect(screen.getByText(/label and your local rules come first/)).toBeInTheDocument();
+    expect(screen.getByText('Do not point brushes with your lips or mouth.')).toBeInTheDocument();
+    expect(screen.getByText(/label, its safety data sheet and your local rules come first/)).toBeInTheDocument();
   });
 
   it('should show no cautions for a palette without such pigments', () => {

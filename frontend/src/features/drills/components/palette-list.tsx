@@ -1,35 +1,9 @@
-import WarningAmberOutlined from '@mui/icons-material/WarningAmberOutlined';
-import Alert from '@mui/material/Alert';
-import AlertTitle from '@mui/material/AlertTitle';
+import { pigmentCautions, pigmentSafety } from '@mixmark/common';
 import Chip from '@mui/material/Chip';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { hazardousPigments, studioCautions } from '../pigment-hazards';
+import { PigmentCautions } from '@/components/colour/pigment-cautions';
 import type { AllowedPaint } from '../types';
-
-/** The cautions for the hazardous pigments among some paints, or nothing when there are none. */
-export function PigmentCautions({ pigments }: { pigments: string[] }) {
-  const hazards = hazardousPigments(pigments);
-  if (hazards.length === 0) return null;
-  return (
-    <Alert severity="warning" role="note" icon={<WarningAmberOutlined />}>
-      <AlertTitle>Handle with care</AlertTitle>
-      <Typography variant="body2" sx={{ mb: 1 }}>
-        {hazards.map((h) => `${h.code} (${h.compound})`).join(', ')}: common studio practice for these pigments:
-      </Typography>
-      <ul style={{ margin: 0, paddingLeft: '1.2em' }}>
-        {studioCautions.map((line) => (
-          <li key={line}>
-            <Typography variant="body2">{line}</Typography>
-          </li>
-        ))}
-      </ul>
-      <Typography variant="body2" sx={{ mt: 1 }}>
-        The paint's own label and your local rules come first.
-      </Typography>
-    </Alert>
-  );
-}
 
 /** The paints a drill allows, with their Colour Index codes and any cautions they call for. */
 export function PaletteList({ palette }: { palette: AllowedPaint[] }) {
@@ -48,7 +22,7 @@ export function PaletteList({ palette }: { palette: AllowedPaint[] }) {
           </Stack>
         ))}
       </Stack>
-      <PigmentCautions pigments={palette.flatMap((paint) => paint.pigments)} />
+      <PigmentCautions notes={pigmentSafety(palette.flatMap((paint) => paint.pigments))} cautions={pigmentCautions} />
     </Stack>
   );
 }
