@@ -42,6 +42,7 @@ export const routes: RouteObject[] = [
         element: <RequireRole roles={['student', 'teacher', 'admin']} />,
         children: [
           lazyRoute(paths.attempt.path, () => import('./routes/attempt')),
+          lazyRoute(paths.palette.path, () => import('./routes/palette')),
         ],
       },
       {
