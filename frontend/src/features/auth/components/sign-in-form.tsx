@@ -3,10 +3,10 @@ import { signInSchema, type SignInInput } from '@mixmark/common';
 import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
-import TextField from '@mui/material/TextField';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link as RouterLink } from 'react-router-dom';
+import { TextInput } from '@/components/ui/text-input';
 import { paths } from '@/config/paths';
 import type { SessionReply } from '@/lib/api-client';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
@@ -29,7 +29,7 @@ export function SignInForm({ onSuccess }: { onSuccess: (session: SessionReply) =
   return (
     <Stack component="form" spacing={2} noValidate onSubmit={onSubmit}>
       <FormAlert message={formError} />
-      <TextField
+      <TextInput
         label="E-mail"
         type="email"
         autoComplete="email"
@@ -37,7 +37,7 @@ export function SignInForm({ onSuccess }: { onSuccess: (session: SessionReply) =
         error={Boolean(errors.email)}
         helperText={fieldHelp('email', errors.email)}
       />
-      <TextField
+      <TextInput
         label="Password"
         type="password"
         autoComplete="current-password"
