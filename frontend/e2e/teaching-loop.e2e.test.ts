@@ -144,6 +144,22 @@ describe('the teaching loop in Chromium', () => {
     await student.getByRole('heading', { name: 'Your attempts' }).waitFor();
     await student.getByRole('cell', { name: drillTitle, exact: true }).waitFor();
     await shootBoth(student, 'student-history');
+
+    await student.getByRole('link', { name: 'Progress', exact: true }).click();
+    await student.getByRole('heading', { name: 'Your progress' }).waitFor();
+    await student.getByRole('figure', { name: 'Overall difference (ΔE00)' }).locator('svg').first().waitFor();
+    await student.getByRole('table', { name: /The same numbers, week by week/ }).waitFor();
+    await student.getByText('Practice streak').waitFor();
+    await shootBoth(student, 'student-progress');
+
+    await student.getByRole('link', { name: 'My palette', exact: true }).click();
+    await student.getByRole('heading', { name: 'My palette' }).waitFor();
+    await student.getByLabel('Name').fill('Deep yellow');
+    await student.getByLabel('Pigments').fill('PY35, PY154');
+    await student.getByRole('button', { name: 'Add paint' }).click();
+    await student.getByRole('heading', { name: 'Deep yellow' }).waitFor();
+    await student.getByText('Handle with care').waitFor();
+    await shootBoth(student, 'student-palette');
   });
 
   it('should word the error when the upload is not a photo', async () => {
@@ -179,6 +195,33 @@ describe('the teaching loop in Chromium', () => {
     await student.getByText('Not yet · 74/100').waitFor();
     await student.getByText(/Less blue next time/).waitFor();
     await screenshot(student, outputDir, 'student-result-overridden');
+  });
+
+  it('should let the teacher open the gradebook, download it as CSV and see progress', async () => {
+    await teacher.getByRole('link', { name: 'Dashboard' }).click();
+    await teacher.getByRole('link', { name: /Thursday watercolour/ }).first().click();
+    await teacher.getByRole('heading', { name: 'Thursday watercolour' }).waitFor();
+    await teacher.getByRole('figure', { name: 'Pass rate' }).locator('svg').first().waitFor();
+    await shootBoth(teacher, 'teacher-class-progress');
+
+    await teacher.getByRole('link', { name: 'Gradebook' }).click();
+    await teacher.getByRole('heading', { name: 'Gradebook: Thursday watercolour' }).waitFor();
+    const cell = teacher.getByRole('link', { name: new RegExp(`^Pip Lindqvist, ${drillTitle}: best \\d+`) });
+    await cell.waitFor();
+    await teacher.getByLabel('Filter by name or e-mail').fill('pip');
+    await cell.waitFor();
+    const [download] = await Promise.all([teacher.waitForEvent('download'), teacher.getByRole('button', { name: 'Download CSV' }).click()]);
+    expect(download.suggestedFilename()).toMatch(/^gradebook-.+\.csv$/);
+    await shootBoth(teacher, 'teacher-gradebook');
+    await cell.click();
+    await teacher.getByRole('heading', { name: `Pip Lindqvist: ${drillTitle}` }).waitFor();
+
+    await teacher.goBack();
+    await teacher.getByRole('link', { name: 'Back to the class' }).click();
+    await teacher.getByRole('link', { name: 'Pip Lindqvist: progress' }).click();
+    await teacher.getByRole('heading', { name: 'Progress of Pip Lindqvist' }).waitFor();
+    await teacher.getByRole('figure', { name: 'Value error (|ΔL*|)' }).locator('svg').first().waitFor();
+    await shootBoth(teacher, 'teacher-student-progress');
     expect([...teacherForeign, ...studentForeign]).toEqual([]);
   });
 });
