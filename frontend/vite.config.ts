@@ -9,7 +9,17 @@ export default defineConfig({
   plugins: [react()],
   resolve: { alias: { '@': fileURLToPath(new URL('./src', import.meta.url)) } },
   server: { proxy: { '/api': { target: apiUrl, changeOrigin: false } } },
-  build: { outDir: 'dist', sourcemap: true, manifest: true, chunkSizeWarningLimit: 800 },
+  build: {
+    outDir: 'dist',
+    sourcemap: true,
+    manifest: true,
+    chunkSizeWarningLimit: 800,
+    rolldownOptions: {
+      // @mixmark/common is pure (no I/O, no globals; see DEVELOPERS.md), so a page that imports
+      // one schema need not carry every other schema's module-level construction.
+      treeshake: { moduleSideEffects: (id: string) => !/[\\/]common[\\/]dist[\\/]/.test(id) },
+    },
+  },
   test: {
     environment: 'jsdom',
     include: ['src/**/*.test.{ts,tsx}'],

@@ -1,10 +1,10 @@
 import { isApiError, type ApiError } from '@mixmark/common';
-import axios, { AxiosError, type InternalAxiosRequestConfig } from 'axios';
+import { createHttpClient, HttpError, send, type RequestConfig } from './http-client';
 import { env } from '@/config/env';
 import { accessToken, authStore, type SessionUser } from './auth-store';
 
 /** The one HTTP client: same-origin `/api`, cookies included, errors in the API's one shape. */
-export const api = axios.create({
+export const api = createHttpClient({
   baseURL: env.VITE_APP_API_URL,
   withCredentials: true,
   timeout: 30000,
@@ -16,12 +16,12 @@ export type SessionReply = { accessToken: string; expiresIn: number; user: Sessi
 /** An Error that carries the API's error shape, as every failed request rejects with. */
 export type ApiRequestError = Error & { apiError: ApiError };
 
-/** Turns anything axios throws into the API's error shape, so screens word every failure alike. */
+/** Turns anything a request throws into the API's error shape, so screens word every failure alike. */
 export function toApiError(error: unknown): ApiError {
   if (error && typeof error === 'object' && 'apiError' in error && isApiError(error.apiError)) {
     return error.apiError;
   }
-  if (error instanceof AxiosError) {
+  if (error instanceof HttpError) {
     const body: unknown = error.response?.data;
     if (isApiError(body)) return body;
     if (error.response) {
@@ -51,11 +51,12 @@ let refreshing: Promise<SessionReply | undefined> | undefined;
  * it: the refresh token rotates, so two requests with the same cookie would end the session.
  */
 export function refreshSession(): Promise<SessionReply | undefined> {
-  refreshing ??= axios
-    .post<SessionReply>(`${env.VITE_APP_API_URL}/auth/refresh`, undefined, {
-      withCredentials: true,
-      timeout: 15000,
-    })
+  refreshing ??= send<SessionReply>({
+    method: 'POST',
+    url: `${env.VITE_APP_API_URL}/auth/refresh`,
+    withCredentials: true,
+    timeout: 15000,
+  })
     .then(
       ({ data }) => {
         authStore.signIn(data.accessToken, data.user);
@@ -75,7 +76,7 @@ export function refreshSession(): Promise<SessionReply | undefined> {
 /** Ends the session on the server (the cookie is cleared there) and here. */
 export async function signOut(): Promise<void> {
   try {
-    await axios.post(`${env.VITE_APP_API_URL}/auth/sign-out`, undefined, { withCredentials: true });
+    await send({ method: 'POST', url: `${env.VITE_APP_API_URL}/auth/sign-out`, withCredentials: true });
   } finally {
     authStore.signOut();
   }
@@ -83,18 +84,16 @@ export async function signOut(): Promise<void> {
 
 api.interceptors.request.use((config) => {
   const token = accessToken();
-  if (token) config.headers.set('Authorization', `Bearer ${token}`);
-  return config;
+  return token ? { ...config, headers: { ...config.headers, Authorization: `Bearer ${token}` } } : config;
 });
 
-type RetriableConfig = InternalAxiosRequestConfig & { _retried?: boolean };
+type RetriableConfig = RequestConfig & { _retried?: boolean };
 
-api.interceptors.response.use(
-  (response) => response,
+api.interceptors.error.use(
   async (error: unknown) => {
-    const config = error instanceof AxiosError ? (error.config as RetriableConfig) : undefined;
+    const config = error instanceof HttpError ? (error.config as RetriableConfig) : undefined;
     const expired =
-      error instanceof AxiosError &&
+      error instanceof HttpError &&
       error.response?.status === 401 &&
       config &&
       !config._retried &&

@@ -73,7 +73,9 @@ describe('GradebookTable', () => {
     // the Bearer header comes from the client's interceptor (see lib/api-client.ts).
     const get = vi.spyOn(api, 'get').mockResolvedValue({
       data: new Blob(['Student,E-mail\r\n'], { type: 'text/csv' }),
+      status: 200,
       headers: { 'content-disposition': 'attachment; filename="gradebook-Thursday.csv"' },
+      config: {},
     });
     Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:gradebook'), revokeObjectURL: vi.fn() });
     let savedAs = '';

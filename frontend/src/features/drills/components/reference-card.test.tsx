@@ -10,7 +10,9 @@ describe('ReferenceCard', () => {
     // jsdom's XHR cannot hand MSW a blob body, so the client's get is stubbed.
     const get = vi.spyOn(api, 'get').mockImplementation(async (url: string) => ({
       data: new Blob([url.endsWith('.png') ? 'png' : 'pdf']),
-      headers: url.endsWith('.pdf') ? { 'content-disposition': 'attachment; filename="mixmark-card-match-letter.pdf"' } : {},
+      status: 200,
+      headers: url.endsWith('.pdf') ? { 'content-disposition': 'attachment; filename="mixmark-card-match-letter.pdf"' } : ({} as Record<string, string>),
+      config: {},
     }));
     Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:card'), revokeObjectURL: vi.fn() });
     let savedAs = '';
