@@ -51,6 +51,7 @@ function RoleNav({ role }: { role: UserRole }) {
               color="inherit"
               sx={{
                 whiteSpace: 'nowrap',
+                flexShrink: 0,
                 '&.active': { bgcolor: 'action.selected', textDecoration: 'underline' },
               }}
             >

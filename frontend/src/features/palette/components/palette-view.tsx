@@ -88,6 +88,8 @@ function PaintCard({ paint }: { paint: Paint }) {
 /** The signed-in user's paints, the cautions some pigments call for, and a form to add one. */
 export function PaletteView() {
   const palette = usePalette();
+  // A fresh form after each paint added (the pigments box keeps its own text).
+  const [added, setAdded] = useState(0);
   if (palette.isPending) return <Loading label="Loading your palette…" />;
   if (palette.isError) return <ErrorAlert error={palette.error} onRetry={() => palette.refetch()} />;
   const { paints, cautions } = palette.data;
@@ -107,7 +109,7 @@ export function PaletteView() {
         <Typography id="add-paint-title" variant="h3" component="h2" sx={{ mb: 2 }}>
           Add a paint
         </Typography>
-        <PaintForm />
+        <PaintForm key={added} onDone={() => setAdded((n) => n + 1)} />
       </Paper>
     </Stack>
   );

@@ -61,6 +61,7 @@ export default function ProgressCharts({ weeks }: { weeks: WeekProgress[] }) {
                 label: metric.label,
                 data: weeks.map((w) => w[metric.key] as number | null),
                 connectNulls: true,
+                showMark: true,
                 color: lineColours[i],
                 valueFormatter: (v: number | null) => (v === null ? 'nothing graded' : v.toFixed(1)),
               }))}

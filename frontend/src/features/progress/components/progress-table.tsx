@@ -15,7 +15,7 @@ export function ProgressTable({ weeks, caption }: { weeks: WeekProgress[]; capti
       <Table size="small">
         <caption style={{ captionSide: 'top', textAlign: 'left', padding: '12px 16px 4px' }}>{caption}</caption>
         <TableHead>
-          <TableRow>
+          <TableRow sx={{ '& th': { whiteSpace: 'nowrap' } }}>
             <TableCell component="th" scope="col">Week of</TableCell>
             <TableCell align="right">Attempts</TableCell>
             <TableCell align="right">Graded</TableCell>
