@@ -126,6 +126,7 @@ export function GradebookTable({ book }: { book: Gradebook }) {
           value={statusFilter}
           onChange={(e) => setStatusFilter(e.target.value as AssignmentStatus | '')}
           size="small"
+          slotProps={{ select: { displayEmpty: true }, inputLabel: { shrink: true } }}
           sx={{ minWidth: 220 }}
         >
           <MenuItem value="">Any status</MenuItem>
