@@ -121,6 +121,8 @@ describe('the teaching loop in Chromium', () => {
     await student.getByRole('link', { name: `Open ${drillTitle}` }).click();
     await student.getByRole('heading', { name: drillTitle }).waitFor();
     await student.getByText('How to photograph your swatch').waitFor();
+    await student.getByRole('img', { name: /Preview of the reference card/ }).waitFor();
+    await student.getByText(/Print at 100 %, no scaling, on matte paper/).waitFor();
     await shootBoth(student, 'student-drill');
 
     const jpeg = renderSyntheticPhoto({
