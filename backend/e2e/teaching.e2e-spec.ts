@@ -215,3 +215,30 @@ describe('my palette (e2e)', () => {
     expect((await request(http).get('/api/palette').set(other.auth).expect(200)).body).toEqual({ paints: [], cautions: [] });
   });
 });
+
+describe('targets from the teacher\'s own swatch (e2e)', () => {
+  let app: INestApplication;
+  beforeAll(async () => {
+    app = await createTestApp();
+  });
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('should read the painted swatch through the card and hand back CIELAB targets', async () => {
+    const { renderScene } = await import('../src/measurement/testing/photo-scene');
+    const painted = { L: 62, a: -18, b: 24 };
+    const { jpeg } = await renderScene({
+      kind: 'match', swatches: [painted], width: 1600, height: 1200, cardFraction: 0.5, rotation: 12, tiltX: 3, tiltY: -3,
+      ev: 0, cast: 'neutral', crossTalk: 0.01, flare: 0.01, vignetting: 0.1, noise: 1.5, jpegQuality: 90, seed: 5,
+    });
+    const teacher = await registerAccount(app, 'teacher');
+    const http = app.getHttpServer();
+    const response = await request(http).post('/api/drills/targets/measure').set(teacher.auth).attach('photo', jpeg, 'mine.jpg').expect(201);
+    expect(response.body.cardKind).toBe('match');
+    expect(response.body.targets).toHaveLength(1);
+    expect(Math.abs(response.body.targets[0].lab.L - painted.L)).toBeLessThan(3);
+    const blank = await request(http).post('/api/drills/targets/measure').set(teacher.auth).attach('photo', Buffer.from('nope'), 'x.jpg').expect(422);
+    expect(blank.body.code).toMatch(/^FILE_/);
+  }, 120_000);
+});
