@@ -8,8 +8,9 @@ export async function getGradebook(classId: string): Promise<Gradebook> {
   return data;
 }
 
+// Other people's uploads change this at any time: always refetch when a page shows it.
 export const getGradebookQueryOptions = (classId: string) =>
-  queryOptions({ queryKey: ['assignments', 'gradebook', classId], queryFn: () => getGradebook(classId) });
+  queryOptions({ queryKey: ['assignments', 'gradebook', classId], queryFn: () => getGradebook(classId), staleTime: 0 });
 
 export function useGradebook({
   classId,

@@ -8,8 +8,9 @@ export async function getClassProgress(id: string): Promise<Progress> {
   return data;
 }
 
+// Other people's uploads change this at any time: always refetch when a page shows it.
 export const getClassProgressQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['progress', 'classes', id], queryFn: () => getClassProgress(id) });
+  queryOptions({ queryKey: ['progress', 'classes', id], queryFn: () => getClassProgress(id), staleTime: 0 });
 
 export function useClassProgress({
   id,

@@ -8,8 +8,9 @@ export async function getMyProgress(): Promise<Progress> {
   return data;
 }
 
+// Other people's uploads change this at any time: always refetch when a page shows it.
 export const getMyProgressQueryOptions = () =>
-  queryOptions({ queryKey: ['progress', 'me'], queryFn: getMyProgress });
+  queryOptions({ queryKey: ['progress', 'me'], queryFn: getMyProgress, staleTime: 0 });
 
 export function useMyProgress({ queryConfig }: { queryConfig?: Partial<ReturnType<typeof getMyProgressQueryOptions>> } = {}) {
   return useQuery({ ...getMyProgressQueryOptions(), ...queryConfig });

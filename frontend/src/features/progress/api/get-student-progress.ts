@@ -8,8 +8,9 @@ export async function getStudentProgress(id: string): Promise<Progress> {
   return data;
 }
 
+// Other people's uploads change this at any time: always refetch when a page shows it.
 export const getStudentProgressQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['progress', 'students', id], queryFn: () => getStudentProgress(id) });
+  queryOptions({ queryKey: ['progress', 'students', id], queryFn: () => getStudentProgress(id), staleTime: 0 });
 
 export function useStudentProgress({
   id,
