@@ -1,4 +1,4 @@
-import { warmCoolIndex, type Mark } from '@mixmark/common';
+import { warmCoolIndex, type Mark, type ProgressSummary, type WeekProgress } from '@mixmark/common';
 
 /** What progress needs of one attempt. */
 export interface ProgressAttempt {
@@ -9,30 +9,7 @@ export interface ProgressAttempt {
   mark: Mark | null;
 }
 
-export interface WeekProgress {
-  /** Monday of the ISO week, YYYY-MM-DD (UTC). */
-  week: string;
-  attempts: number;
-  graded: number;
-  /** Share of graded attempts that passed (0–1), null with none graded. */
-  passRate: number | null;
-  /** Mean ΔE00 over every target of the graded attempts. */
-  meanDeltaE: number | null;
-  /** Value: mean |ΔL*|. */
-  meanValueError: number | null;
-  /** Temperature: mean |ΔWC| (warm–cool index of Ou et al. 2004), and hue: mean |ΔH′|. */
-  meanTemperatureError: number | null;
-  meanHueError: number | null;
-  /** Chroma: mean |ΔC′|. */
-  meanChromaError: number | null;
-}
-
-export interface ProgressSummary {
-  weeks: WeekProgress[];
-  totals: { attempts: number; graded: number; passed: number };
-  /** Consecutive days with at least one attempt, ending today or yesterday (UTC). */
-  streakDays: number;
-}
+export type { ProgressSummary, WeekProgress };
 
 const day = (date: Date) => date.toISOString().slice(0, 10);
 
