@@ -129,4 +129,27 @@ describe('auth (e2e, real PostgreSQL)', () => {
     const { body } = await register().expect(201);
     await request(http).get('/api/admin/users').set('authorization', `Bearer ${body.accessToken}`).expect(403);
   });
+
+  it('should show the weekly digest choice on /me (on by default) and change it and the name with PATCH', async () => {
+    const { body } = await register().expect(201);
+    const auth = { authorization: `Bearer ${body.accessToken}` };
+    const me = await request(http).get('/api/auth/me').set(auth).expect(200);
+    expect(me.body).toMatchObject({ id: body.user.id, displayName: 'Wren Test', weeklyDigest: true });
+
+    const off = await request(http).patch('/api/auth/me').set(auth).send({ weeklyDigest: false }).expect(200);
+    expect(off.body).toMatchObject({ displayName: 'Wren Test', weeklyDigest: false });
+    const renamed = await request(http).patch('/api/auth/me').set(auth).send({ displayName: '  Wren Halloway ', role: 'admin' }).expect(200);
+    expect(renamed.body).toMatchObject({ displayName: 'Wren Halloway', weeklyDigest: false, role: 'teacher' });
+    const [row] = await app.get(DataSource).query(`SELECT display_name, weekly_digest, role FROM users WHERE id = $1`, [body.user.id]);
+    expect(row).toEqual({ display_name: 'Wren Halloway', weekly_digest: false, role: 'teacher' });
+  });
+
+  it('should refuse a profile change with nothing to change or bad fields (400 naming them)', async () => {
+    const { body } = await register().expect(201);
+    const auth = { authorization: `Bearer ${body.accessToken}` };
+    const empty = await request(http).patch('/api/auth/me').set(auth).send({ weekly_digest: false }).expect(400);
+    expect(empty.body).toMatchObject({ statusCode: 400, code: 'validation_failed', details: { '': 'profile-empty' } });
+    const bad = await request(http).patch('/api/auth/me').set(auth).send({ displayName: ' ', weeklyDigest: 'sometimes' }).expect(400);
+    expect(bad.body).toMatchObject({ statusCode: 400, code: 'validation_failed', details: { displayName: 'min', weeklyDigest: 'typeError' } });
+  });
 });

@@ -59,6 +59,7 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
   //                                                                                  anon stu  oStu tea  oTea admin
   const rows: Row[] = [
     { method: 'get', path: () => '/api/auth/me', expect: statuses(401, 200, 200, 200, 200, 200) },
+    { method: 'patch', path: () => '/api/auth/me', body: () => ({ weeklyDigest: true }), expect: statuses(401, 200, 200, 200, 200, 200) },
     { method: 'get', path: () => '/api/classes', expect: statuses(401, 200, 200, 200, 200, 200) },
     { method: 'post', path: () => '/api/classes', body: () => ({ name: 'New class' }), expect: statuses(401, 403, 403, 201, 201, 201) },
     { method: 'get', path: () => `/api/classes/${ids.classId}`, expect: statuses(401, 200, 404, 200, 404, 200) },

@@ -1,12 +1,14 @@
-import { Body, Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Patch, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import {
   passwordResetRequestSchema,
   passwordResetSchema,
+  profileUpdateSchema,
   registerSchema,
   signInSchema,
   type PasswordResetInput,
   type PasswordResetRequestInput,
+  type ProfileUpdate,
   type RegisterInput,
   type SignInInput,
 } from '@mixmark/common';
@@ -15,7 +17,7 @@ import { CurrentUser, type AuthUser } from '../common/decorators/current-user.de
 import { Public } from '../common/decorators/public.decorator';
 import { SchemaValidationPipe } from '../common/pipes/schema-validation.pipe';
 import type { AllConfigType } from '../config/config.type';
-import { toPublicUser, UsersService, type PublicUser } from '../users/users.service';
+import { toProfile, UsersService, type Profile, type PublicUser } from '../users/users.service';
 import { AuthService, type Session } from './auth.service';
 import { SignInRateLimitGuard } from './guards/sign-in-rate-limit.guard';
 import { PasswordResetsService } from './password-resets.service';
@@ -95,9 +97,19 @@ export class AuthController {
     await this.passwordResetsService.reset(body.token, body.password);
   }
 
+  /** The signed-in person, with their own settings (`weeklyDigest`). */
   @Get('me')
-  async me(@CurrentUser() caller: AuthUser): Promise<PublicUser> {
-    return toPublicUser(await this.usersService.findOne(caller.id));
+  async me(@CurrentUser() caller: AuthUser): Promise<Profile> {
+    return toProfile(await this.usersService.findOne(caller.id));
+  }
+
+  /** Changes the signed-in person's display name and/or weekly digest choice; answers as `GET me`. */
+  @Patch('me')
+  async updateMe(
+    @CurrentUser() caller: AuthUser,
+    @Body(new SchemaValidationPipe(profileUpdateSchema)) body: ProfileUpdate,
+  ): Promise<Profile> {
+    return toProfile(await this.usersService.updateProfile(caller.id, body));
   }
 
   private reply(session: Session, response: Response): SessionReply {

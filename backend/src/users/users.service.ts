@@ -16,6 +16,16 @@ export function toPublicUser(user: User): PublicUser {
   return { id: user.id, email: user.email, displayName: user.displayName, role: user.role, createdAt: user.createdAt };
 }
 
+/** What the signed-in person sees of their own account (`GET /api/auth/me`): also their settings. */
+export interface Profile extends PublicUser {
+  /** Whether the weekly progress digest is e-mailed to them. */
+  weeklyDigest: boolean;
+}
+
+export function toProfile(user: User): Profile {
+  return { ...toPublicUser(user), weeklyDigest: user.weeklyDigest };
+}
+
 @Injectable()
 export class UsersService {
   constructor(@InjectRepository(User) private readonly usersRepository: Repository<User>) {}
@@ -54,6 +64,14 @@ export class UsersService {
   async updateRole(id: string, role: UserRole): Promise<User> {
     const user = await this.findOne(id);
     user.role = role;
+    return this.usersRepository.save(user);
+  }
+
+  /** Changes the person's own settings; fields left out stay as they are. */
+  async updateProfile(id: string, changes: { displayName?: string; weeklyDigest?: boolean }): Promise<User> {
+    const user = await this.findOne(id);
+    if (changes.displayName !== undefined) user.displayName = changes.displayName;
+    if (changes.weeklyDigest !== undefined) user.weeklyDigest = changes.weeklyDigest;
     return this.usersRepository.save(user);
   }
 

@@ -1,4 +1,4 @@
-import { object, string, type InferType } from 'yup';
+import { boolean, object, string, type InferType } from 'yup';
 
 /** E-mail addresses are compared lower-cased and trimmed everywhere. */
 export const emailField = () => string().trim().lowercase().email().max(254).required();
@@ -34,3 +34,19 @@ export const updateRoleSchema = object({
   role: string().oneOf(['admin', 'teacher', 'student'] as const).required(),
 });
 export type UpdateRoleInput = InferType<typeof updateRoleSchema>;
+
+/**
+ * The signed-in person's own settings (`PATCH /api/auth/me`): the name shown to teachers and
+ * classmates, and whether the weekly progress digest is e-mailed. Either field may be left out;
+ * a body with neither is refused (`details: { '': 'profile-empty' }`), so that a misspelt key
+ * (stripped as unknown) cannot pass for a saved change.
+ */
+export const profileUpdateSchema = object({
+  displayName: string().trim().min(1).max(80).optional(),
+  weeklyDigest: boolean().strict().optional(),
+}).test(
+  'profile-empty',
+  'change the display name, the weekly digest, or both',
+  (v) => v.displayName !== undefined || v.weeklyDigest !== undefined,
+);
+export type ProfileUpdate = InferType<typeof profileUpdateSchema>;

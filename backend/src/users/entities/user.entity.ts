@@ -32,6 +32,10 @@ export class User {
   @Column({ name: 'password_hash', type: 'text', select: false })
   passwordHash: string;
 
+  /** Whether the weekly progress digest is e-mailed to this person (on by default). */
+  @Column({ name: 'weekly_digest', type: 'boolean', default: true })
+  weeklyDigest: boolean;
+
   @ManyToOne(() => Studio, (studio) => studio.members, { nullable: true, onDelete: 'SET NULL' })
   @JoinColumn({ name: 'studio_id' })
   studio: Relation<Studio> | null;
