@@ -34,6 +34,9 @@ export default async function globalSetup() {
   process.env.NODE_ENV = 'test';
   process.env.LOG_LEVEL = 'warn';
   process.env.BCRYPT_ROUNDS ??= '4';
+  // No scheduled weekly digest while tests run (it would mail every test account on a Monday
+  // morning); the digest tests run their weeks by hand.
+  process.env.DIGEST_CRON ??= 'off';
   // Photos of the tests go to the test output, never into the start command's store.
   process.env.STORAGE_DIR ??= join(rootDir, 'test-output', 'photos-backend');
 }

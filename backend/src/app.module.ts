@@ -19,12 +19,14 @@ import mailConfig from './config/mail.config';
 import storageConfig from './config/storage.config';
 import type { AllConfigType } from './config/config.type';
 import { dataSourceOptions } from './database/data-source';
+import { DigestModule } from './digest/digest.module';
 import { DrillsModule } from './drills/drills.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { OutboxModule } from './outbox/outbox.module';
 import { PalettesModule } from './palettes/palettes.module';
 import { ProgressModule } from './progress/progress.module';
+import { QueueModule } from './queue/queue.module';
 import { StorageModule } from './storage/storage.module';
 
 @Module({
@@ -51,6 +53,7 @@ import { StorageModule } from './storage/storage.module';
     HealthModule,
     MailModule,
     StorageModule,
+    QueueModule,
     OutboxModule.register(process.env.NODE_ENV),
     AuthModule,
     ClassesModule,
@@ -60,6 +63,7 @@ import { StorageModule } from './storage/storage.module';
     ProgressModule,
     CardsModule,
     PalettesModule,
+    DigestModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

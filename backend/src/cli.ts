@@ -1,24 +1,33 @@
 import 'reflect-metadata';
+import { NestFactory } from '@nestjs/core';
 import { DataSource } from 'typeorm';
+import { AppModule } from './app.module';
 import { readDatabaseConfig } from './config/database.config';
 import { dataSourceOptions } from './database/data-source';
 import { seedDemo } from './database/seeds/seed-demo';
 import { seedTeaching } from './database/seeds/seed-teaching';
 import { readStorageConfig } from './config/storage.config';
 import { LocalPhotoStorage } from './storage/local-photo-storage';
+import { parseIsoWeek, previousIsoWeek } from './digest/iso-week';
+import { WeeklyDigestService } from './digest/weekly-digest.service';
 
 /**
  * Operator commands that need the database but not the web server:
  *   node dist/cli.js migrate        apply pending migrations
  *   node dist/cli.js migrate:revert undo the last migration
  *   node dist/cli.js seed           load the demo scenario (idempotent)
+ *   node dist/cli.js digest [--week YYYY-Www]
+ *                                   send the weekly progress digest of a week (default: last
+ *                                   week) now, from this process; whoever had it already is
+ *                                   skipped, so it is safe beside the schedule
  * Prints one line per step; on failure one line on stderr and exit code 1.
  */
-async function main(command: string | undefined): Promise<void> {
-  const commands = ['migrate', 'migrate:revert', 'seed'];
+async function main(command: string | undefined, args: string[]): Promise<void> {
+  const commands = ['migrate', 'migrate:revert', 'seed', 'digest'];
   if (!command || !commands.includes(command)) {
     throw new Error(`Expected one of ${commands.join(', ')} but received ${command ?? 'nothing'}`);
   }
+  if (command === 'digest') return digest(args);
   const dataSource = new DataSource(dataSourceOptions(readDatabaseConfig()));
   await dataSource.initialize();
   try {
@@ -49,7 +58,26 @@ async function main(command: string | undefined): Promise<void> {
   }
 }
 
-main(process.argv[2]).catch((error: unknown) => {
+async function digest(args: string[]): Promise<void> {
+  const flag = args.indexOf('--week');
+  if (flag >= 0 && !args[flag + 1]) throw new Error('Expected a week after --week, such as --week 2031-W10');
+  const week = flag >= 0 ? parseIsoWeek(args[flag + 1]) : previousIsoWeek(new Date());
+  // The whole app without HTTP and without working the queues (no grading here, no schedule).
+  process.env.GRADING_IN_SERVER = 'false';
+  const app = await NestFactory.createApplicationContext(AppModule, { logger: ['fatal', 'error', 'warn'] });
+  try {
+    const counts = await app.get(WeeklyDigestService).runWeek(week);
+    console.log(
+      `weekly digest ${week.key}: ${counts.sent} sent, ${counts['already-sent']} sent before, ` +
+        `${counts['nothing-to-say']} with nothing to say, ${counts.failed} failed`,
+    );
+    if (counts.failed > 0) throw new Error(`${counts.failed} digests could not be sent; run the command again to retry them`);
+  } finally {
+    await app.close();
+  }
+}
+
+main(process.argv[2], process.argv.slice(3)).catch((error: unknown) => {
   console.error(`mixmark cli: ${error instanceof Error ? error.message : String(error)}`);
   process.exit(1);
 });

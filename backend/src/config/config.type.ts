@@ -35,6 +35,8 @@ export interface MailConfig {
   from: string;
   /** Absolute path of the folder the fake SMTP server keeps messages in (dev outbox). */
   outboxDir: string;
+  /** When the weekly digest is sent (cron, UTC), or null when it is not scheduled. */
+  digestCron: string | null;
 }
 
 export interface StorageConfig {
@@ -46,6 +48,10 @@ export interface StorageConfig {
   gradingInServer: boolean;
   /** Grading jobs worked at once by one process. */
   gradingConcurrency: number;
+  /** Seconds a grading job may stay active before it counts as abandoned and is retried. */
+  gradingExpireSeconds: number;
+  /** Seconds between the queue's maintenance runs (expiring abandoned jobs, archiving). */
+  queueMaintenanceSeconds: number;
 }
 
 /** Every config namespace, for `ConfigService<AllConfigType>` with `{ infer: true }`. */

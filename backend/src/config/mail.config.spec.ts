@@ -14,6 +14,7 @@ describe('mail configuration', () => {
         smtpUrl: 'smtp://127.0.0.1:2525',
         from: 'Mixmark <no-reply@mixmark.test>',
         outboxDir: join(root, '.data', 'outbox'),
+        digestCron: '0 7 * * 1',
       });
     } finally {
       rmSync(root, { recursive: true, force: true });
@@ -22,6 +23,12 @@ describe('mail configuration', () => {
 
   it('should keep an absolute OUTBOX_DIR as given', () => {
     expect(readMailConfig({ OUTBOX_DIR: '/var/tmp/outbox' }).outboxDir).toBe('/var/tmp/outbox');
+  });
+
+  it('should take the digest schedule as five cron fields or "off"', () => {
+    expect(readMailConfig({ DIGEST_CRON: '30 6 * * 1' }).digestCron).toBe('30 6 * * 1');
+    expect(readMailConfig({ DIGEST_CRON: 'off' }).digestCron).toBeNull();
+    expect(() => readMailConfig({ DIGEST_CRON: 'mondays' })).toThrow('DIGEST_CRON must be five cron fields in UTC');
   });
 
   it('should list every bad variable in one error', () => {

@@ -22,6 +22,14 @@ const schema = object({
     )
     .default('Mixmark <no-reply@mixmark.test>'),
   OUTBOX_DIR: string().optional(),
+  // When the weekly progress digest goes out: five cron fields in UTC, or "off".
+  DIGEST_CRON: string()
+    .trim()
+    .matches(
+      /^(off|(\S+\s+){4}\S+)$/,
+      'DIGEST_CRON must be five cron fields in UTC such as "0 7 * * 1" (Mondays 07:00), or "off"',
+    )
+    .default('0 7 * * 1'),
 });
 
 /**
@@ -60,6 +68,7 @@ export function readMailConfig(
     smtpUrl: parsed.SMTP_URL,
     from: parsed.MAIL_FROM,
     outboxDir: isAbsolute(outboxDir) ? outboxDir : join(findRepoRoot(cwd), outboxDir),
+    digestCron: parsed.DIGEST_CRON === 'off' ? null : parsed.DIGEST_CRON,
   };
 }
 

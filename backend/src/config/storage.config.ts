@@ -10,6 +10,11 @@ const schema = object({
   UPLOAD_MAX_BYTES: number().integer().min(1024).max(200 * 1024 * 1024).default(20 * 1024 * 1024),
   GRADING_IN_SERVER: boolean().default(true),
   GRADING_CONCURRENCY: number().integer().min(1).max(32).default(1),
+  // How long a grading job may stay active before pg-boss counts its worker as dead and retries it
+  // (a 12 MP photo takes a few seconds; the default leaves room for a slow machine).
+  GRADING_EXPIRE_SECONDS: number().integer().min(1).max(3600).default(300),
+  // How often the queue looks for expired jobs (and archives finished ones).
+  QUEUE_MAINTENANCE_SECONDS: number().integer().min(1).max(3600).default(120),
 });
 
 /** The repository root (nearest package.json with workspaces), for relative folders. */
@@ -30,6 +35,8 @@ export function readStorageConfig(env = process.env): StorageConfig {
     uploadMaxBytes: parsed.UPLOAD_MAX_BYTES,
     gradingInServer: parsed.GRADING_IN_SERVER,
     gradingConcurrency: parsed.GRADING_CONCURRENCY,
+    gradingExpireSeconds: parsed.GRADING_EXPIRE_SECONDS,
+    queueMaintenanceSeconds: parsed.QUEUE_MAINTENANCE_SECONDS,
   };
 }
 

@@ -1,7 +1,8 @@
-import { Injectable, Logger, type OnApplicationShutdown, type OnModuleInit } from '@nestjs/common';
+import { Injectable, type OnModuleInit } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
-import PgBoss from 'pg-boss';
+import type PgBoss from 'pg-boss';
 import type { AllConfigType } from '../config/config.type';
+import { QueueService } from '../queue/queue.service';
 import { GradingService } from './grading.service';
 
 export const GRADE_ATTEMPT = 'grade-attempt';
@@ -17,35 +18,28 @@ export interface SqlExecutor {
  * grades them. Jobs are retried with back-off when a worker crashes or a step throws.
  */
 @Injectable()
-export class GradingQueue implements OnModuleInit, OnApplicationShutdown {
-  private readonly logger = new Logger(GradingQueue.name);
+export class GradingQueue implements OnModuleInit {
   private boss: PgBoss | undefined;
+  private expireInSeconds = 300;
 
   constructor(
     private readonly configService: ConfigService<AllConfigType>,
+    private readonly queueService: QueueService,
     private readonly gradingService: GradingService,
   ) {}
 
   async onModuleInit(): Promise<void> {
-    const boss = new PgBoss({
-      connectionString: this.configService.getOrThrow('database.url', { infer: true }),
-      schema: 'pgboss',
-      max: 3,
-      // Maintenance (archiving, expiring) runs in the workers; web servers only send.
-      supervise: true,
-      migrate: true,
-    });
-    boss.on('error', (error) => this.logger.error(`queue: ${error.message}`));
-    await boss.start();
+    const boss = await this.queueService.ready();
+    const storage = this.configService.getOrThrow('storage', { infer: true });
+    this.expireInSeconds = storage.gradingExpireSeconds;
     await boss.createQueue(GRADE_ATTEMPT, {
       name: GRADE_ATTEMPT,
       retryLimit: 4,
       retryDelay: 2,
       retryBackoff: true,
-      expireInSeconds: 300,
+      expireInSeconds: this.expireInSeconds,
     });
     this.boss = boss;
-    const storage = this.configService.getOrThrow('storage', { infer: true });
     if (storage.gradingInServer) await this.work(storage.gradingConcurrency);
   }
 
@@ -65,11 +59,9 @@ export class GradingQueue implements OnModuleInit, OnApplicationShutdown {
    * an attempt is never queued twice.
    */
   async enqueue(attemptId: string, db?: SqlExecutor): Promise<void> {
-    await this.requireBoss().send(GRADE_ATTEMPT, { attemptId }, { singletonKey: attemptId, db: db as never });
-  }
-
-  async onApplicationShutdown(): Promise<void> {
-    await this.boss?.stop({ graceful: true, wait: true, timeout: 20_000 });
+    // The expiry is given per job as well: a queue made earlier keeps the options it was made with.
+    // A job whose worker died is retried once it has been active longer than this.
+    await this.requireBoss().send(GRADE_ATTEMPT, { attemptId }, { singletonKey: attemptId, expireInSeconds: this.expireInSeconds, db: db as never });
   }
 
   private requireBoss(): PgBoss {

@@ -7,5 +7,6 @@ import { ProgressService } from './progress.service';
   imports: [ClassesModule],
   controllers: [ProgressController],
   providers: [ProgressService],
+  exports: [ProgressService],
 })
 export class ProgressModule {}

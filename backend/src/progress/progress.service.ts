@@ -28,8 +28,11 @@ export class ProgressService {
     private readonly classesService: ClassesService,
   ) {}
 
-  /** A student's progress: their own, or a student of one of the caller's classes. */
-  async forStudent(caller: AuthUser, studentId: string): Promise<ProgressSummary & { student: { id: string; displayName: string } }> {
+  /**
+   * A student's progress: their own, or a student of one of the caller's classes.
+   * @param now - the day the streak runs up to (today unless a summary of the past asks otherwise)
+   */
+  async forStudent(caller: AuthUser, studentId: string, { now }: { now?: Date } = {}): Promise<ProgressSummary & { student: { id: string; displayName: string } }> {
     if (caller.id !== studentId && caller.role !== 'admin') {
       const [teaches] = await this.dataSource.query(
         `SELECT 1 FROM class_members m JOIN classes c ON c.id = m.class_id WHERE m.student_id = $1 AND c.teacher_id = $2 LIMIT 1`,
@@ -40,7 +43,7 @@ export class ProgressService {
     const [student] = await this.dataSource.query<{ id: string; display_name: string }[]>(`SELECT id, display_name FROM users WHERE id = $1`, [studentId]);
     if (!student) throw notFound();
     const attempts = await this.attempts('a.student_id = $1', [studentId]);
-    return { ...summariseProgress(attempts.map(this.toProgressAttempt)), student: { id: student.id, displayName: student.display_name } };
+    return { ...summariseProgress(attempts.map(this.toProgressAttempt), now), student: { id: student.id, displayName: student.display_name } };
   }
 
   /** The class's progress over its assignments. */

@@ -5,6 +5,13 @@ export type { MailContent } from './mail-content';
 export { passwordResetMail, type PasswordResetMailInput } from './password-reset-mail';
 export {
   weeklyDigestMail,
+  type DigestDueItem,
   type DigestSkill,
   type WeeklyDigestMailInput,
 } from './weekly-digest-mail';
+export {
+  teacherDigestMail,
+  type TeacherDigestAssignment,
+  type TeacherDigestClass,
+  type TeacherDigestMailInput,
+} from './teacher-digest-mail';

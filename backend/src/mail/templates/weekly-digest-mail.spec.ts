@@ -56,4 +56,31 @@ describe('weeklyDigestMail', () => {
       'passRate must be a share from 0 to 1, but is 71',
     );
   });
+
+  it('should give the errors by skill, the streak, what is still due and the way to turn it off', () => {
+    const mail = weeklyDigestMail({
+      ...input,
+      errors: { value: 2.04, temperature: 0.0349, chroma: 4.46 },
+      streakDays: 1,
+      due: [{ title: 'Value ladder in indigo', className: 'Tuesday wash', dueAt: new Date('2031-03-11T17:00:00Z'), standing: 'not started' }],
+      accountUrl: 'https://mixmark.test/account',
+    });
+    expect(mail.text).toContain('Value error (|ΔL*|): 2.0\nTemperature error (warm–cool index): 0.03\nChroma error (|ΔC′|): 4.5\n');
+    expect(mail.text).toContain('Practice streak: 1 day\n');
+    expect(mail.text).toContain('Still to do:\n- Value ladder in indigo (Tuesday wash): due 11 March 2031, not started');
+    expect(mail.text).toContain('turn them off on your account page:\nhttps://mixmark.test/account\n');
+    expect(mail.html).toContain('<a href="https://mixmark.test/account">https://mixmark.test/account</a>');
+  });
+
+  it('should leave out the pass rate when nothing of the week was graded', () => {
+    const mail = weeklyDigestMail({ ...input, attempts: 2, passRate: null, meanDeltaE: null });
+    expect(mail.text).toContain('Attempts: 2\n');
+    expect(mail.text).not.toContain('Passed:');
+  });
+
+  it('should refuse an account link that is not a web address', () => {
+    expect(() => weeklyDigestMail({ ...input, accountUrl: 'javascript:alert(1)' })).toThrow(
+      'accountUrl must be an absolute http(s) address, but is "javascript:alert(1)"',
+    );
+  });
 });
