@@ -10,7 +10,7 @@ import { latestMailTo, registerAccount, type TestAccount } from './helpers';
 // An in-gamut burnt orange, invented for the test.
 const target: Lab = { L: 52, a: 28, b: 40 };
 
-async function waitForGrading(http: ReturnType<INestApplication['getHttpServer']>, auth: object, id: string, timeoutMs = 60_000) {
+async function waitForGrading(http: ReturnType<INestApplication['getHttpServer']>, auth: { authorization: string }, id: string, timeoutMs = 60_000) {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const { body } = await request(http).get(`/api/attempts/${id}`).set(auth).expect(200);

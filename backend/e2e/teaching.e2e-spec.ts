@@ -226,7 +226,7 @@ describe('targets from the teacher\'s own swatch (e2e)', () => {
   });
 
   it('should read the painted swatch through the card and hand back CIELAB targets', async () => {
-    const { renderScene } = await import('../src/measurement/testing/photo-scene');
+    const { renderScene } = await import('../src/measurement/testing/photo-scene.js');
     const painted = { L: 62, a: -18, b: 24 };
     const { jpeg } = await renderScene({
       kind: 'match', swatches: [painted], width: 1600, height: 1200, cardFraction: 0.5, rotation: 12, tiltX: 3, tiltY: -3,

@@ -1,5 +1,6 @@
 import { spawn } from 'node:child_process';
-import { fileURLToPath } from 'node:url';
+import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
@@ -13,6 +14,8 @@ import { createTestApp } from './create-test-app';
 import { registerAccount, type TestAccount } from './helpers';
 
 const target = { L: 55, a: 24, b: 40 };
+// The built CLI, from the backend folder (where jest runs) or the repository root.
+const cliPath = [resolve('dist/cli.js'), resolve('backend/dist/cli.js')].find((path) => existsSync(path)) ?? resolve('dist/cli.js');
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
 /**
@@ -166,7 +169,7 @@ describe('weekly progress digest (e2e, real PostgreSQL, pg-boss and fake SMTP)',
     );
     const cli = (week: string) =>
       new Promise<{ code: number | null; out: string }>((resolve) => {
-        const child = spawn(process.execPath, [fileURLToPath(new URL('../dist/cli.js', import.meta.url)), 'digest', '--week', week], { env: process.env });
+        const child = spawn(process.execPath, [cliPath, 'digest', '--week', week], { env: process.env });
         let out = '';
         child.stdout.on('data', (chunk) => (out += chunk));
         child.stderr.on('data', (chunk) => (out += chunk));

@@ -7,7 +7,7 @@ import { dataSourceOptions } from './database/data-source';
 import { seedDemo } from './database/seeds/seed-demo';
 import { seedTeaching } from './database/seeds/seed-teaching';
 import { readStorageConfig } from './config/storage.config';
-import { LocalPhotoStorage } from './storage/local-photo-storage';
+import { createPhotoStorage } from './storage/create-photo-storage';
 import { parseIsoWeek, previousIsoWeek } from './digest/iso-week';
 import { WeeklyDigestService } from './digest/weekly-digest.service';
 
@@ -45,7 +45,7 @@ async function main(command: string | undefined, args: string[]): Promise<void> 
       const summary = await seedDemo(dataSource);
       console.log(`demo data: ${summary.usersCreated} accounts added, ${summary.usersKept} already there`);
       const started = Date.now();
-      const teaching = await seedTeaching(dataSource, new LocalPhotoStorage(readStorageConfig().dir));
+      const teaching = await seedTeaching(dataSource, createPhotoStorage(readStorageConfig()));
       console.log(
         teaching.skipped
           ? 'demo data: classes, drills and attempts already there'

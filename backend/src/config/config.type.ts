@@ -39,8 +39,27 @@ export interface MailConfig {
   digestCron: string | null;
 }
 
+/** An S3-compatible bucket for photos. */
+export interface S3StorageConfig {
+  bucket: string;
+  region: string;
+  /** Null for AWS itself; the store's address otherwise, e.g. `http://127.0.0.1:9000`. */
+  endpoint: string | null;
+  /** `bucket` in the path rather than the host name (most self-hosted stores want this). */
+  forcePathStyle: boolean;
+  /** Null: the SDK's own chain (environment, shared files, instance role). */
+  accessKeyId: string | null;
+  secretAccessKey: string | null;
+  /** Put before every key, e.g. `mixmark/`; empty for none. */
+  prefix: string;
+}
+
 export interface StorageConfig {
-  /** Folder of the local photo store (S3-compatible storage later, behind the same interface). */
+  /** Which photo store: the local folder or an S3-compatible bucket. */
+  driver: 'local' | 's3';
+  /** The bucket's settings; null unless S3_BUCKET is set. */
+  s3: S3StorageConfig | null;
+  /** Folder of the local photo store. */
   dir: string;
   /** Largest photo upload accepted, bytes. */
   uploadMaxBytes: number;

@@ -6,7 +6,21 @@ import type { StorageConfig } from './config.type';
 import { validateConfig } from './validate-config';
 
 const schema = object({
+  // Where photos live: a local folder (the default, and what `npm start` uses) or an
+  // S3-compatible bucket.
+  STORAGE_DRIVER: string().oneOf(['local', 's3'], 'STORAGE_DRIVER must be "local" or "s3"').default('local'),
   STORAGE_DIR: string().default('.data/photos'),
+  S3_BUCKET: string()
+    .trim()
+    .when('STORAGE_DRIVER', { is: 's3', then: (s) => s.required('S3_BUCKET must be set when STORAGE_DRIVER is s3') }),
+  S3_REGION: string().trim().default('us-east-1'),
+  S3_ENDPOINT: string().trim().url('S3_ENDPOINT must be a URL such as http://127.0.0.1:9000').optional(),
+  S3_FORCE_PATH_STYLE: boolean().default(false),
+  S3_ACCESS_KEY_ID: string().trim().optional(),
+  S3_SECRET_ACCESS_KEY: string()
+    .trim()
+    .when('S3_ACCESS_KEY_ID', { is: (v: unknown) => Boolean(v), then: (s) => s.required('S3_SECRET_ACCESS_KEY must be set with S3_ACCESS_KEY_ID') }),
+  S3_PREFIX: string().trim().default(''),
   UPLOAD_MAX_BYTES: number().integer().min(1024).max(200 * 1024 * 1024).default(20 * 1024 * 1024),
   GRADING_IN_SERVER: boolean().default(true),
   GRADING_CONCURRENCY: number().integer().min(1).max(32).default(1),
@@ -31,6 +45,18 @@ function repoRoot(from = process.cwd()): string {
 export function readStorageConfig(env = process.env): StorageConfig {
   const parsed = validateConfig(schema, env);
   return {
+    driver: parsed.STORAGE_DRIVER as 'local' | 's3',
+    s3: parsed.S3_BUCKET
+      ? {
+          bucket: parsed.S3_BUCKET,
+          region: parsed.S3_REGION,
+          endpoint: parsed.S3_ENDPOINT ?? null,
+          forcePathStyle: parsed.S3_FORCE_PATH_STYLE,
+          accessKeyId: parsed.S3_ACCESS_KEY_ID ?? null,
+          secretAccessKey: parsed.S3_SECRET_ACCESS_KEY ?? null,
+          prefix: parsed.S3_PREFIX,
+        }
+      : null,
     dir: isAbsolute(parsed.STORAGE_DIR) ? parsed.STORAGE_DIR : join(repoRoot(), parsed.STORAGE_DIR),
     uploadMaxBytes: parsed.UPLOAD_MAX_BYTES,
     gradingInServer: parsed.GRADING_IN_SERVER,
