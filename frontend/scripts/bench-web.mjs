@@ -1,5 +1,6 @@
 // Reports the JavaScript a first visit downloads for a route (gzip), from the Vite manifest of
-// the last build: the entry with its static imports, plus the route's lazy module with its own.
+// the last build: the entry with its static imports, plus the route's lazy module with its own;
+// then what that code loads only when used (a form's checks, a dialog), reported beside it.
 // A benchmark to read, not a test: it asserts nothing. Run `npm run build -w frontend` first.
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -25,9 +26,26 @@ const routes = {
   'student result': 'src/app/routes/attempt.tsx',
   'drill editor': 'src/app/routes/teacher/drill-editor.tsx',
 };
+/** What a route's own chunks import lazily (a form's checks, a chart), other routes left out. */
+function onUse(files) {
+  const later = new Set();
+  const keys = Object.keys(manifest).filter((key) => files.has(manifest[key].file) && key !== 'index.html');
+  for (const key of keys) {
+    for (const lazy of manifest[key].dynamicImports ?? []) {
+      if (!lazy.startsWith('src/app/routes/')) collect(lazy, later);
+    }
+  }
+  for (const file of files) later.delete(file);
+  return later;
+}
+
 const entry = collect('index.html');
 console.log(`entry alone: ${gzipKb(entry).toFixed(1)} KB gzip (${entry.size} files)`);
 for (const [name, key] of Object.entries(routes)) {
   const files = collect(key, new Set(entry));
-  console.log(`${name}: ${gzipKb(files).toFixed(1)} KB gzip (${files.size} files)`);
+  const later = onUse(files);
+  console.log(
+    `${name}: ${gzipKb(files).toFixed(1)} KB gzip (${files.size} files)` +
+      (later.size ? `; + ${gzipKb(later).toFixed(1)} KB loaded on first use (${later.size} files)` : ''),
+  );
 }

@@ -1,8 +1,9 @@
 import CssBaseline from '@mui/material/CssBaseline';
-import { ThemeProvider } from '@mui/material/styles';
+import ThemeProvider from '@mui/system/ThemeProvider';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
-import { Component, useState, type ReactNode } from 'react';
+import { Component, useEffect, useState, type ReactNode } from 'react';
 import { MainErrorFallback } from '@/components/errors/main-error-fallback';
+import { authStore } from '@/lib/auth-store';
 import { createQueryClient } from '@/lib/react-query';
 import { theme } from '@/theme/theme';
 
@@ -16,8 +17,27 @@ class RootErrorBoundary extends Component<{ children: ReactNode }, { error?: Err
   }
 }
 
+/**
+ * When a session ends (signed out, or a refresh that failed), nothing of it stays in the cache
+ * for the next person at this browser.
+ */
+function useForgetOnSignOut(client: QueryClient) {
+  useEffect(() => {
+    let was = authStore.get().status;
+    const unsubscribe = authStore.subscribe(() => {
+      const now = authStore.get().status;
+      if (was === 'signed-in' && now === 'signed-out') client.clear();
+      was = now;
+    });
+    return () => {
+      unsubscribe();
+    };
+  }, [client]);
+}
+
 export function AppProvider({ children, queryClient }: { children: ReactNode; queryClient?: QueryClient }) {
   const [client] = useState(() => queryClient ?? createQueryClient());
+  useForgetOnSignOut(client);
   return (
     <ThemeProvider theme={theme}>
       <CssBaseline />

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { server } from '@/testing/mocks/server';
 import { signInAs } from '@/testing/test-utils';
 import { api, refreshSession } from './api-client';
-import { authStore } from './auth-store';
+import { authStore, type SessionUser } from './auth-store';
 
 const newSession = {
   accessToken: 'fresh-token',
@@ -43,6 +43,63 @@ describe('api client', () => {
     expect(a.data).toEqual([{ id: 'c1' }]);
     expect(b.data).toEqual([{ id: 'c1' }]);
     expect(refreshes).toBe(1);
+  });
+
+  it('should send again without a second refresh when another request already refreshed', async () => {
+    signInAs('student');
+    let refreshes = 0;
+    server.use(
+      http.post('*/api/auth/refresh', () => {
+        refreshes += 1;
+        return HttpResponse.json(newSession);
+      }),
+      http.get('*/api/classes', ({ request }) => {
+        if (request.headers.get('authorization') === 'Bearer fresh-token') return HttpResponse.json([{ id: 'c1' }]);
+        // While this request was on its way, another one refreshed the session.
+        authStore.signIn('fresh-token', newSession.user as SessionUser);
+        return HttpResponse.json({ statusCode: 401, code: 'unauthorized', message: 'Sign in first.' }, { status: 401 });
+      }),
+    );
+    const reply = await api.get('/classes');
+    expect(reply.data).toEqual([{ id: 'c1' }]);
+    expect(refreshes).toBe(0);
+  });
+
+  it('should not refresh for a failed sign-in, and reject with the API’s error', async () => {
+    let refreshes = 0;
+    server.use(
+      http.post('*/api/auth/refresh', () => {
+        refreshes += 1;
+        return HttpResponse.json(newSession);
+      }),
+      http.post('*/api/auth/sign-in', () =>
+        HttpResponse.json({ statusCode: 401, code: 'invalid_credentials', message: 'Wrong e-mail or password.' }, { status: 401 }),
+      ),
+    );
+    await expect(api.post('/auth/sign-in', { email: 'a@b.test', password: 'x' })).rejects.toMatchObject({
+      message: 'Wrong e-mail or password.',
+      apiError: { code: 'invalid_credentials' },
+    });
+    expect(refreshes).toBe(0);
+  });
+
+  it('should report upload progress and put defined params in the query', async () => {
+    let url = '';
+    server.use(
+      http.post('*/api/attempts', ({ request }) => {
+        url = request.url;
+        return HttpResponse.json({ id: 'a1' }, { status: 202 });
+      }),
+    );
+    const body = new FormData();
+    body.append('photo', new File([new Uint8Array(2048)], 'swatch.jpg', { type: 'image/jpeg' }));
+    const seen: number[] = [];
+    await api.post('/attempts', body, {
+      params: { drillId: 'd1', classId: undefined },
+      onUploadProgress: (event) => seen.push(event.loaded),
+    });
+    expect(new URL(url).search).toBe('?drillId=d1');
+    expect(seen.length).toBeGreaterThan(0);
   });
 
   it('should sign out when the refresh fails', async () => {

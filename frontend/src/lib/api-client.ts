@@ -1,10 +1,14 @@
 import { isApiError, type ApiError } from '@mixmark/common';
-import { createHttpClient, HttpError, send, type RequestConfig } from './http-client';
+import axios, { AxiosError, type InternalAxiosRequestConfig } from 'axios';
 import { env } from '@/config/env';
 import { accessToken, authStore, type SessionUser } from './auth-store';
 
-/** The one HTTP client: same-origin `/api`, cookies included, errors in the API's one shape. */
-export const api = createHttpClient({
+/**
+ * The one HTTP client (axios): same-origin `/api`, cookies included, the access token added to
+ * every request, a 401 refreshed once in the reply interceptor below, and every failure rejected
+ * in the API's one error shape.
+ */
+export const api = axios.create({
   baseURL: env.VITE_APP_API_URL,
   withCredentials: true,
   timeout: 30000,
@@ -21,7 +25,7 @@ export function toApiError(error: unknown): ApiError {
   if (error && typeof error === 'object' && 'apiError' in error && isApiError(error.apiError)) {
     return error.apiError;
   }
-  if (error instanceof HttpError) {
+  if (error instanceof AxiosError) {
     const body: unknown = error.response?.data;
     if (isApiError(body)) return body;
     if (error.response) {
@@ -44,19 +48,20 @@ export function toApiError(error: unknown): ApiError {
   };
 }
 
+/** Requests to these paths never trigger a refresh: they are how a session starts and ends. */
+const sessionPaths = /^\/?auth\/(sign-in|register|refresh|sign-out|password-reset)/;
+
 let refreshing: Promise<SessionReply | undefined> | undefined;
 
 /**
  * Asks for a new access token with the refresh cookie. Calls made while one is on its way share
  * it: the refresh token rotates, so two requests with the same cookie would end the session.
+ * When it fails the session is over: the store signs out (and the app clears its cache and the
+ * protected routes send the person to sign in, see `app/provider.tsx` and `lib/authorization`).
  */
 export function refreshSession(): Promise<SessionReply | undefined> {
-  refreshing ??= send<SessionReply>({
-    method: 'POST',
-    url: `${env.VITE_APP_API_URL}/auth/refresh`,
-    withCredentials: true,
-    timeout: 15000,
-  })
+  refreshing ??= api
+    .post<SessionReply>('/auth/refresh', undefined, { timeout: 15000 })
     .then(
       ({ data }) => {
         authStore.signIn(data.accessToken, data.user);
@@ -76,36 +81,43 @@ export function refreshSession(): Promise<SessionReply | undefined> {
 /** Ends the session on the server (the cookie is cleared there) and here. */
 export async function signOut(): Promise<void> {
   try {
-    await send({ method: 'POST', url: `${env.VITE_APP_API_URL}/auth/sign-out`, withCredentials: true });
+    await api.post('/auth/sign-out');
   } finally {
     authStore.signOut();
   }
 }
 
-api.interceptors.request.use((config) => {
+type SessionConfig = InternalAxiosRequestConfig & {
+  /** The access token this request was sent with (undefined: none). */
+  _sentToken?: string;
+  /** Set once the request has been sent again after a refresh: never loop. */
+  _retried?: boolean;
+};
+
+api.interceptors.request.use((config: SessionConfig) => {
   const token = accessToken();
-  return token ? { ...config, headers: { ...config.headers, Authorization: `Bearer ${token}` } } : config;
+  config._sentToken = token;
+  if (token) config.headers.set('Authorization', `Bearer ${token}`);
+  return config;
 });
 
-type RetriableConfig = RequestConfig & { _retried?: boolean };
-
-api.interceptors.error.use(
-  async (error: unknown) => {
-    const config = error instanceof HttpError ? (error.config as RetriableConfig) : undefined;
-    const expired =
-      error instanceof HttpError &&
-      error.response?.status === 401 &&
-      config &&
-      !config._retried &&
-      !config.url?.startsWith('/auth/');
-    if (expired && accessToken()) {
-      // The access token ran out: refresh once and send the request again. When the refresh
-      // fails the store is signed out, and the protected routes send the person to sign in.
-      config._retried = true;
-      const session = await refreshSession();
-      if (session) return api.request(config);
-    }
-    const apiError = toApiError(error);
-    return Promise.reject(Object.assign(new Error(apiError.message), { apiError }));
-  },
-);
+api.interceptors.response.use(undefined, async (error: unknown) => {
+  const config = error instanceof AxiosError ? (error.config as SessionConfig | undefined) : undefined;
+  const expired =
+    error instanceof AxiosError &&
+    error.response?.status === 401 &&
+    config !== undefined &&
+    !config._retried &&
+    !sessionPaths.test(config.url ?? '');
+  if (expired && config._sentToken) {
+    config._retried = true;
+    // Another request may have refreshed while this one was on its way: then the new token is
+    // already here and the request only needs sending again. Otherwise refresh (one refresh for
+    // every request that is waiting) and send it again with the new token.
+    if (accessToken() && accessToken() !== config._sentToken) return api.request(config);
+    const session = await refreshSession();
+    if (session) return api.request(config);
+  }
+  const apiError = toApiError(error);
+  return Promise.reject(Object.assign(new Error(apiError.message), { apiError }));
+});

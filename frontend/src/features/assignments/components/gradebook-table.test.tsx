@@ -1,5 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { AxiosHeaders } from 'axios';
 import { describe, expect, it, vi } from 'vitest';
 import { api } from '@/lib/api-client';
 import { renderApp } from '@/testing/test-utils';
@@ -74,8 +75,9 @@ describe('GradebookTable', () => {
     const get = vi.spyOn(api, 'get').mockResolvedValue({
       data: new Blob(['Student,E-mail\r\n'], { type: 'text/csv' }),
       status: 200,
+      statusText: 'OK',
       headers: { 'content-disposition': 'attachment; filename="gradebook-Thursday.csv"' },
-      config: {},
+      config: { headers: new AxiosHeaders() },
     });
     Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:gradebook'), revokeObjectURL: vi.fn() });
     let savedAs = '';

@@ -1,5 +1,4 @@
-import { yupResolver } from '@hookform/resolvers/yup';
-import { passwordResetRequestSchema, type PasswordResetRequestInput } from '@mixmark/common';
+import type { PasswordResetRequestInput } from '@mixmark/common';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
@@ -7,13 +6,17 @@ import TextField from '@mui/material/TextField';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
+import { lazyYupResolver } from '@/lib/lazy-resolver';
 import { useRequestPasswordReset } from '../api/request-password-reset';
 import { FormAlert } from './form-alert';
+
+/** The shared schema, loaded when the form is first used (see lib/lazy-resolver.ts). */
+const resolver = lazyYupResolver<PasswordResetRequestInput>(() => import('../schemas').then((m) => m.passwordResetRequestSchema));
 
 export function ForgotPasswordForm() {
   const [formError, setFormError] = useState<string>();
   const form = useForm<PasswordResetRequestInput>({
-    resolver: yupResolver(passwordResetRequestSchema),
+    resolver,
   });
   const request = useRequestPasswordReset();
   const { errors } = form.formState;
@@ -35,8 +38,8 @@ export function ForgotPasswordForm() {
   });
 
   return (
-    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit}>
-      <FormAlert message={formError} />
+    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit} onFocus={() => void resolver.preload()}>
+      <FormAlert message={formError ?? errors.root?.message} />
       <TextField
         label="E-mail"
         type="email"

@@ -1,5 +1,4 @@
-import { yupResolver } from '@hookform/resolvers/yup';
-import { registerSchema, type RegisterInput } from '@mixmark/common';
+import type { RegisterInput } from '@mixmark/common';
 import Button from '@mui/material/Button';
 import FormControl from '@mui/material/FormControl';
 import FormControlLabel from '@mui/material/FormControlLabel';
@@ -13,8 +12,12 @@ import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import type { SessionReply } from '@/lib/api-client';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
+import { lazyYupResolver } from '@/lib/lazy-resolver';
 import { useRegister } from '../api/register';
 import { FormAlert } from './form-alert';
+
+/** The shared schema, loaded when the form is first used (see lib/lazy-resolver.ts). */
+const resolver = lazyYupResolver<RegisterInput>(() => import('../schemas').then((m) => m.registerSchema));
 
 export function RegisterForm({
   defaultRole = 'student',
@@ -25,7 +28,7 @@ export function RegisterForm({
 }) {
   const [formError, setFormError] = useState<string>();
   const form = useForm<RegisterInput>({
-    resolver: yupResolver(registerSchema),
+    resolver,
     defaultValues: { role: defaultRole, displayName: '', email: '', password: '' },
   });
   const registerAccount = useRegister({ onSuccess });
@@ -42,8 +45,8 @@ export function RegisterForm({
   });
 
   return (
-    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit}>
-      <FormAlert message={formError} />
+    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit} onFocus={() => void resolver.preload()}>
+      <FormAlert message={formError ?? errors.root?.message} />
       <FormControl error={Boolean(errors.role)}>
         <FormLabel id="register-role">I am joining as</FormLabel>
         <Controller

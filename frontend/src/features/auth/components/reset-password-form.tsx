@@ -1,18 +1,21 @@
-import { yupResolver } from '@hookform/resolvers/yup';
-import { passwordResetSchema, type PasswordResetInput } from '@mixmark/common';
+import type { PasswordResetInput } from '@mixmark/common';
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
+import { lazyYupResolver } from '@/lib/lazy-resolver';
 import { useResetPassword } from '../api/reset-password';
 import { FormAlert } from './form-alert';
+
+/** The shared schema, loaded when the form is first used (see lib/lazy-resolver.ts). */
+const resolver = lazyYupResolver<PasswordResetInput>(() => import('../schemas').then((m) => m.passwordResetSchema));
 
 export function ResetPasswordForm({ token, onSuccess }: { token: string; onSuccess: () => void }) {
   const [formError, setFormError] = useState<string>();
   const form = useForm<PasswordResetInput>({
-    resolver: yupResolver(passwordResetSchema),
+    resolver,
     defaultValues: { token, password: '' },
   });
   const reset = useResetPassword({ onSuccess });
@@ -26,10 +29,10 @@ export function ResetPasswordForm({ token, onSuccess }: { token: string; onSucce
   });
 
   return (
-    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit}>
+    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit} onFocus={() => void resolver.preload()}>
       <FormAlert
         message={
-          formError ?? (errors.token ? 'This reset link is not complete. Open the link from the e-mail again.' : undefined)
+          formError ?? errors.root?.message ?? (errors.token ? 'This reset link is not complete. Open the link from the e-mail again.' : undefined)
         }
       />
       <TextField

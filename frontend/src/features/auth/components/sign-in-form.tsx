@@ -1,5 +1,4 @@
-import { yupResolver } from '@hookform/resolvers/yup';
-import { signInSchema, type SignInInput } from '@mixmark/common';
+import type { SignInInput } from '@mixmark/common';
 import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
@@ -10,12 +9,16 @@ import { TextInput } from '@/components/ui/text-input';
 import { paths } from '@/config/paths';
 import type { SessionReply } from '@/lib/api-client';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
+import { lazyYupResolver } from '@/lib/lazy-resolver';
 import { useSignIn } from '../api/sign-in';
 import { FormAlert } from './form-alert';
 
+/** The shared schema, loaded when the form is first used (see lib/lazy-resolver.ts). */
+const resolver = lazyYupResolver<SignInInput>(() => import('../schemas').then((m) => m.signInSchema));
+
 export function SignInForm({ onSuccess }: { onSuccess: (session: SessionReply) => void }) {
   const [formError, setFormError] = useState<string>();
-  const form = useForm<SignInInput>({ resolver: yupResolver(signInSchema) });
+  const form = useForm<SignInInput>({ resolver });
   const signIn = useSignIn({ onSuccess });
   const { errors } = form.formState;
 
@@ -27,8 +30,8 @@ export function SignInForm({ onSuccess }: { onSuccess: (session: SessionReply) =
   });
 
   return (
-    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit}>
-      <FormAlert message={formError} />
+    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit} onFocus={() => void resolver.preload()}>
+      <FormAlert message={formError ?? errors.root?.message} />
       <TextInput
         label="E-mail"
         type="email"

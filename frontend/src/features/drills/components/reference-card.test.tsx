@@ -1,5 +1,6 @@
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { AxiosHeaders } from 'axios';
 import { describe, expect, it, vi } from 'vitest';
 import { api } from '@/lib/api-client';
 import { renderApp } from '@/testing/test-utils';
@@ -7,12 +8,13 @@ import { ReferenceCard } from './reference-card';
 
 describe('ReferenceCard', () => {
   it('should show the printing words and fetch the PDF for the chosen paper through the client', async () => {
-    // jsdom's XHR cannot hand MSW a blob body, so the client's get is stubbed.
+    // jsdom's XHR cannot hand MSW a blob body, so the axios instance's get is stubbed.
     const get = vi.spyOn(api, 'get').mockImplementation(async (url: string) => ({
       data: new Blob([url.endsWith('.png') ? 'png' : 'pdf']),
       status: 200,
-      headers: url.endsWith('.pdf') ? { 'content-disposition': 'attachment; filename="mixmark-card-match-letter.pdf"' } : ({} as Record<string, string>),
-      config: {},
+      statusText: 'OK',
+      headers: url.endsWith('.pdf') ? { 'content-disposition': 'attachment; filename="mixmark-card-match-letter.pdf"' } : {},
+      config: { headers: new AxiosHeaders() },
     }));
     Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:card'), revokeObjectURL: vi.fn() });
     let savedAs = '';
