@@ -7,7 +7,9 @@ describe('readEnv', () => {
   });
 
   it('should take a path or an http(s) address', () => {
-    expect(readEnv({ VITE_APP_API_URL: 'https://api.mixmark.test' }).VITE_APP_API_URL).toBe('https://api.mixmark.test');
+    expect(readEnv({ VITE_APP_API_URL: 'https://api.mixmark.test' }).VITE_APP_API_URL).toBe(
+      'https://api.mixmark.test',
+    );
   });
 
   it('should list what is wrong in words', () => {

@@ -27,7 +27,9 @@ describe('lazyYupResolver', () => {
       return object({ email: string().required() });
     });
     const first = await resolver({ email: '' }, undefined, options);
-    expect(first.errors).toMatchObject({ root: { type: 'network_error', message: expect.stringMatching(/cannot reach its server/) } });
+    expect(first.errors).toMatchObject({
+      root: { type: 'network_error', message: expect.stringMatching(/cannot reach its server/) },
+    });
     const second = await resolver({ email: '' }, undefined, options);
     expect(second.errors).toMatchObject({ email: { type: 'required' } });
   });

@@ -36,7 +36,8 @@ export function lazyYupResolver<T extends FieldValues>(
         errors: {
           root: {
             type: 'network_error',
-            message: 'Mixmark cannot reach its server to check this form. Check your connection and try again.',
+            message:
+              'Mixmark cannot reach its server to check this form. Check your connection and try again.',
           },
         },
       } as unknown as Awaited<ReturnType<Resolver<T>>>;

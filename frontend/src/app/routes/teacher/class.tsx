@@ -72,7 +72,10 @@ export default function TeacherClassRoute() {
         <Grid size={{ xs: 12, md: 4 }}>
           <Stack spacing={3}>
             <ClassCodePanel code={data.code} />
-            <Paper sx={{ p: 2 }}>
+            <Paper component="section" aria-labelledby="invite-heading" sx={{ p: 2 }}>
+              <Typography id="invite-heading" variant="h3" component="h2" sx={{ mb: 1.5 }}>
+                Invite students
+              </Typography>
               <InviteForm classId={data.id} />
             </Paper>
             <Paper sx={{ p: 2 }}>

@@ -69,6 +69,33 @@ describe('GradebookTable', () => {
     expect(screen.getByText('1 of 3 students match')).toBeInTheDocument();
   });
 
+  it('should page a 30-student class, sorting and filtering the whole class, not just the page', async () => {
+    const first = ['Ada', 'Bea', 'Cai', 'Dov', 'Eli', 'Fen'];
+    const last = ['Marsh', 'Tallow', 'Umber', 'Wren', 'Yarrow'];
+    const students = first.flatMap((f, i) =>
+      last.map((l, j) => ({
+        id: `s${i}-${j}`,
+        displayName: `${f} ${l}`,
+        email: `${f}.${l}@example.test`.toLowerCase(),
+        // Scores rise through the class, so the best scores sit on the last page by name.
+        cells: { a1: { status: 'passed' as const, attempts: 1, latestScore: 40 + i * 5 + j, bestScore: 40 + i * 5 + j, latestAttemptId: `t${i}-${j}` } },
+      })),
+    );
+    renderApp(<GradebookTable book={{ ...book, students }} />);
+    expect(names()).toHaveLength(25);
+    expect(screen.getByText('Students 1–25 of 30')).toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Go to the next page of students' }));
+    expect(names()).toEqual(['Fen Marsh', 'Fen Tallow', 'Fen Umber', 'Fen Wren', 'Fen Yarrow']);
+    // Sorting by score takes the whole class and starts again at the first page.
+    await userEvent.click(screen.getByRole('button', { name: 'Sort by best score in Warm grey' }));
+    expect(names()[0]).toBe('Fen Yarrow');
+    expect(screen.getByText('Students 1–25 of 30')).toBeInTheDocument();
+    // A filter finds a student who was not on the page shown.
+    await userEvent.type(screen.getByLabelText('Filter by name or e-mail'), 'ada');
+    expect(names()).toEqual(['Ada Marsh', 'Ada Tallow', 'Ada Umber', 'Ada Wren', 'Ada Yarrow'].reverse());
+    expect(screen.queryByText(/Students \d+–\d+ of/)).not.toBeInTheDocument();
+  });
+
   it('should fetch the CSV through the API client and save it under the server’s name', async () => {
     // jsdom's XHR cannot hand MSW a blob body, so the client call itself is stubbed here;
     // the Bearer header comes from the client's interceptor (see lib/api-client.ts).

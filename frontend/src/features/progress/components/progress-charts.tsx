@@ -72,7 +72,7 @@ export default function ProgressCharts({ weeks }: { weeks: WeekProgress[] }) {
         </Grid>
       ))}
       <Grid size={{ xs: 12, md: 6 }}>
-        <ChartCard id="pass-rate" title="Pass rate" hint="Share of graded attempts that passed.">
+        <ChartCard id="pass-rate" title="Pass rate" hint="Share of graded attempts that passed, written above each week’s bar (0 % when none passed).">
           <BarChart
             height={chartHeight}
             xAxis={[{ scaleType: 'band', data: labels }]}
@@ -84,10 +84,14 @@ export default function ProgressCharts({ weeks }: { weeks: WeekProgress[] }) {
                 data: weeks.map((w) => (w.passRate === null ? null : Math.round(w.passRate * 100))),
                 color: lineColours[0],
                 valueFormatter: (v: number | null) => (v === null ? 'nothing graded' : formatPassRate(v / 100)),
+                // Every graded week carries its figure above the bar, so a week where nothing
+                // passed shows "0 %" on the baseline instead of no bar at all.
+                barLabel: (item) => (item.value === null ? null : `${item.value} %`),
+                barLabelPlacement: 'outside',
               },
             ]}
             hideLegend
-            margin={{ left: 0, right: 16 }}
+            margin={{ left: 0, right: 16, top: 24 }}
           />
         </ChartCard>
       </Grid>

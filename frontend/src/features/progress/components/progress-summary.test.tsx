@@ -37,6 +37,18 @@ describe('ProgressCharts', () => {
     const ticks = [...overall.querySelectorAll('.MuiChartsAxis-directionX .MuiChartsAxis-tickLabel')].map((t) => t.textContent);
     expect(ticks).toEqual(['2 Mar', '9 Mar', '16 Mar']);
   });
+
+  it('should label every graded week on the pass-rate chart, so a week where nothing passed shows 0 %', () => {
+    const none = [
+      week('2026-03-02', { attempts: 3, graded: 3, passRate: 0, meanDeltaE: 11.2 }),
+      week('2026-03-09', { attempts: 1, graded: 0 }),
+      week('2026-03-16', { attempts: 4, graded: 4, passRate: 0.5, meanDeltaE: 4.1 }),
+    ];
+    const { container } = render(<ProgressCharts weeks={none} />);
+    const passRate = container.querySelector('[data-chart="pass-rate"]') as HTMLElement;
+    const labels = [...passRate.querySelectorAll('.MuiBarChart-label')].map((t) => t.textContent);
+    expect(labels).toEqual(['0 %', '50 %']);
+  });
 });
 
 describe('ProgressSummary', () => {
