@@ -28,6 +28,7 @@ import { useUpdateDrill } from '../api/update-drill';
 import { kindWords, type Drill } from '../types';
 import { PigmentCautions } from '@/components/colour/pigment-cautions';
 import { PigmentsField } from '@/components/colour/pigments-field';
+import { MeasureSwatch } from './measure-swatch';
 import { TargetField } from './target-field';
 
 const optionalNumber = { setValueAs: (v: string | number | undefined) => (v === '' || v === undefined ? undefined : Number(v)) };
@@ -67,6 +68,9 @@ export function drillToForm(drill: Drill): CreateDrillInput {
     }),
   };
 }
+
+/** A target's label, kept when its colour is replaced by a measured one. */
+const labelOf = (target: TargetInput | undefined) => (target?.label ? { label: target.label } : {});
 
 const emptyDrill: CreateDrillInput = {
   title: '',
@@ -168,6 +172,15 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
           <Typography color="text.secondary" variant="body2">
             {min === max ? `A ${kindWords[kind].name.toLowerCase()} drill takes ${min} target${min > 1 ? 's' : ''}.` : `${min} to ${max} steps, lightest first.`}
           </Typography>
+          <MeasureSwatch
+            drillId={drill?.id}
+            kind={kind}
+            targetCount={targets.fields.length}
+            onFill={(labs) => targets.replace(labs.map((lab, i) => ({ ...labelOf(form.getValues(`targets.${i}`)), lab })))}
+            onUse={(index, lab) =>
+              form.setValue(`targets.${index}`, { ...labelOf(form.getValues(`targets.${index}`)), lab }, { shouldDirty: true })
+            }
+          />
           {errors.targets?.root?.message || errors.targets?.message ? (
             <Alert severity="error">{errors.targets?.root?.message ?? errors.targets?.message}</Alert>
           ) : null}

@@ -15,7 +15,7 @@ import { useDownloadCardPdf, type CardPaper } from '../api/download-card-pdf';
 import { useCardPreview } from '../api/get-card-preview';
 
 /** Letter where it is the usual paper (the Americas' letter countries), A4 elsewhere. */
-function defaultPaper(): CardPaper {
+export function defaultPaper(): CardPaper {
   const region = typeof navigator === 'undefined' ? '' : (navigator.language.split('-')[1] ?? '');
   return ['US', 'CA', 'MX', 'PH', 'CL', 'CO', 'VE'].includes(region.toUpperCase()) ? 'letter' : 'A4';
 }
