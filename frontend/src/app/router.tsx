@@ -43,6 +43,7 @@ export const routes: RouteObject[] = [
         children: [
           lazyRoute(paths.attempt.path, () => import('./routes/attempt')),
           lazyRoute(paths.palette.path, () => import('./routes/palette')),
+          lazyRoute(paths.account.path, () => import('./routes/account')),
         ],
       },
       {

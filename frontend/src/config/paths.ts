@@ -41,6 +41,8 @@ export const paths = {
     progress: { path: '/student/progress', getHref: () => '/student/progress' },
   },
   palette: { path: '/palette', getHref: () => '/palette' },
+  /** The signed-in person's own settings (the weekly digest mail links here). */
+  account: { path: '/account', getHref: () => '/account' },
   /** One address for an attempt (the mail links to it): the result for a student, review for a teacher. */
   attempt: { path: '/attempts/:attemptId', getHref: (attemptId: string) => `/attempts/${attemptId}` },
   teacher: {

@@ -37,6 +37,10 @@ export const authStore = {
   },
   signIn: (accessToken: string, user: SessionUser) => set({ status: 'signed-in', accessToken, user }),
   signOut: () => set({ status: 'signed-out' }),
+  /** The person changed their own details (a new display name): the session goes on. */
+  updateUser: (user: SessionUser) => {
+    if (state.status === 'signed-in') set({ ...state, user });
+  },
   /** For tests: back to the state of a fresh page load. */
   reset: () => set({ status: 'restoring' }),
 };

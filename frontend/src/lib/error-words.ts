@@ -27,7 +27,11 @@ const fieldWords: Record<string, Record<string, string>> = {
     taken: 'An account already uses this address. Sign in, or reset the password.',
   },
   password: { required: 'Enter a password.', min: 'Use at least 10 characters.' },
-  displayName: { required: 'Enter the name others will see.' },
+  displayName: {
+    required: 'Enter the name others will see.',
+    min: 'Enter the name others will see.',
+    max: 'Use at most 80 characters.',
+  },
   role: { required: 'Choose teacher or student.' },
   code: {
     required: 'Enter the class code.',

@@ -5,10 +5,69 @@ import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useQueryClient } from '@tanstack/react-query';
+import { Component, lazy, Suspense, useEffect, useId, useState, type ReactNode } from 'react';
 import { Link as RouterLink, NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { homeFor, paths } from '@/config/paths';
 import { signOut } from '@/lib/api-client';
-import { useAuth, type UserRole } from '@/lib/auth-store';
+import { useAuth, type SessionUser, type UserRole } from '@/lib/auth-store';
+
+const loadUserMenu = () => import('./user-menu');
+const UserMenu = lazy(loadUserMenu);
+
+/** If the menu's code cannot be loaded (offline, a new release), the header offers plain links. */
+class MenuBoundary extends Component<{ fallback: ReactNode; children: ReactNode }, { failed: boolean }> {
+  override state = { failed: false };
+  static getDerivedStateFromError() {
+    return { failed: true };
+  }
+  override render() {
+    return this.state.failed ? this.props.fallback : this.props.children;
+  }
+}
+
+/** The name in the top bar, opening the person's menu (account settings, sign out). */
+function UserMenuButton({ user, onSignOut }: { user: SessionUser; onSignOut: () => void }) {
+  const menuId = useId();
+  const [anchor, setAnchor] = useState<HTMLElement | null>(null);
+  // Signed in: fetch the menu's code now, so the first click opens it at once.
+  useEffect(() => {
+    void loadUserMenu().catch(() => undefined);
+  }, []);
+  const plainLinks = (
+    <>
+      <Button component={RouterLink} to={paths.account.getHref()} color="inherit">
+        Account
+      </Button>
+      <Button variant="outlined" onClick={onSignOut}>
+        Sign out
+      </Button>
+    </>
+  );
+  return (
+    <MenuBoundary fallback={plainLinks}>
+      <Button
+        variant="outlined"
+        aria-haspopup="menu"
+        aria-expanded={anchor ? 'true' : undefined}
+        aria-controls={anchor ? menuId : undefined}
+        onClick={(event) => setAnchor(event.currentTarget)}
+        sx={{ maxWidth: { xs: 180, sm: 280 } }}
+      >
+        <Box component="span" sx={{ overflow: 'hidden', textOverflow: 'ellipsis', whiteSpace: 'nowrap' }}>
+          {user.displayName}
+        </Box>
+        <Box component="span" aria-hidden sx={{ ml: 0.75 }}>
+          ▾
+        </Box>
+      </Button>
+      {anchor && (
+        <Suspense fallback={null}>
+          <UserMenu id={menuId} anchorEl={anchor} user={user} onClose={() => setAnchor(null)} onSignOut={onSignOut} />
+        </Suspense>
+      )}
+    </MenuBoundary>
+  );
+}
 
 const navByRole: Record<UserRole, { label: string; href: string }[]> = {
   student: [
@@ -93,17 +152,7 @@ export function AppLayout() {
             </Link>
             <Box sx={{ flexGrow: 1 }} />
             {user ? (
-              <>
-                <Typography
-                  variant="body2"
-                  sx={{ display: { xs: 'none', sm: 'block' }, color: 'text.secondary' }}
-                >
-                  {user.displayName} · {user.role}
-                </Typography>
-                <Button variant="outlined" onClick={onSignOut}>
-                  Sign out
-                </Button>
-              </>
+              <UserMenuButton user={user} onSignOut={onSignOut} />
             ) : auth.status === 'signed-out' ? (
               <>
                 <Button component={RouterLink} to={paths.auth.signIn.getHref()} color="inherit">
