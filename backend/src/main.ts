@@ -3,12 +3,14 @@ import { Logger, type LogLevel } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
 import { AppModule } from './app.module';
+import { guardAgainstDatabaseOutages } from './common/process/database-outage-guard';
 import type { AllConfigType } from './config/config.type';
 import { configureApp } from './configure-app';
 
 const levels: LogLevel[] = ['fatal', 'error', 'warn', 'log', 'debug', 'verbose'];
 
 async function bootstrap(): Promise<void> {
+  guardAgainstDatabaseOutages();
   const wanted = (process.env.LOG_LEVEL ?? 'log') as LogLevel;
   const logger = levels.slice(0, Math.max(2, levels.indexOf(wanted) + 1));
   const app = await NestFactory.create(AppModule, { logger, bufferLogs: true });

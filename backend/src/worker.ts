@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import { AppModule } from './app.module';
+import { guardAgainstDatabaseOutages } from './common/process/database-outage-guard';
 
 /**
  * A grading worker: the same application without the HTTP listener, working the PostgreSQL
@@ -9,6 +10,7 @@ import { AppModule } from './app.module';
  * (`npm run worker -w backend`; GRADING_CONCURRENCY jobs at once each).
  */
 async function main(): Promise<void> {
+  guardAgainstDatabaseOutages();
   process.env.GRADING_IN_SERVER = 'true';
   const app = await NestFactory.createApplicationContext(AppModule, { logger: ['fatal', 'error', 'warn', 'log'] });
   app.enableShutdownHooks();

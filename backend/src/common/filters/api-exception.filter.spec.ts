@@ -58,4 +58,26 @@ describe('ApiExceptionFilter', () => {
     expect(JSON.stringify(sent.body)).not.toContain('secret');
     expect(sent.body).toMatchObject({ statusCode: 500, code: 'internal_error' });
   });
+
+  it('should answer 503 database_unavailable when the database cannot be reached, also through TypeORM', () => {
+    const refused = Object.assign(new Error('connect ECONNREFUSED 127.0.0.1:5432'), { code: 'ECONNREFUSED' });
+    const shutdown = Object.assign(new Error('terminating connection due to administrator command'), { code: '57P01' });
+    const wrapped = Object.assign(new Error('Query failed'), { name: 'QueryFailedError', driverError: shutdown });
+    for (const error of [refused, wrapped, new Error('Connection terminated unexpectedly')]) {
+      const { host, sent } = hostCapturing();
+      jest.spyOn((filter as unknown as { logger: { error: () => void } }).logger, 'error').mockImplementation(() => undefined);
+      filter.catch(error, host);
+      expect(sent).toEqual({
+        status: 503,
+        body: { statusCode: 503, code: 'database_unavailable', message: 'Mixmark cannot reach its database just now. Please try again in a moment.' },
+      });
+    }
+  });
+
+  it('should still answer 500 for a query that failed for another reason', () => {
+    const { host, sent } = hostCapturing();
+    jest.spyOn((filter as unknown as { logger: { error: () => void } }).logger, 'error').mockImplementation(() => undefined);
+    filter.catch(Object.assign(new Error('duplicate key'), { name: 'QueryFailedError', driverError: { code: '23505', message: 'duplicate key' } }), host);
+    expect(sent.status).toBe(500);
+  });
 });

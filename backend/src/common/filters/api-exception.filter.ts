@@ -23,9 +23,28 @@ const codeByStatus: Record<number, string> = {
 };
 
 /**
+ * Socket errors and PostgreSQL's "connection exception" (08…) and "operator intervention" (57P…)
+ * classes: the database is down, restarting or out of reach, which a retry in a moment may cure.
+ * https://www.postgresql.org/docs/15/errcodes-appendix.html
+ */
+const unreachableCodes = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', 'ENOTFOUND']);
+const unreachableMessages = /Connection terminated|connection timeout|timeout exceeded when trying to connect|Client has encountered a connection error|the database system is (starting up|shutting down|in recovery mode)|terminating connection/i;
+
+/** True when `error` (or the driver error TypeORM wraps) says the database cannot be reached. */
+export function isDatabaseUnavailable(error: unknown): boolean {
+  for (let e = error as { code?: unknown; message?: unknown; driverError?: unknown } | undefined, depth = 0; e && depth < 3; e = e.driverError as typeof e, depth += 1) {
+    const code = typeof e.code === 'string' ? e.code : '';
+    if (unreachableCodes.has(code) || /^(08|57P0)/.test(code)) return true;
+    if (typeof e.message === 'string' && unreachableMessages.test(e.message)) return true;
+  }
+  return false;
+}
+
+/**
  * Turns every error into the one JSON shape `{ statusCode, code, message, details? }`.
  * Services throw Nest's exceptions, optionally with `{ code, message, details }` as the body;
- * anything else is logged and answered as a 500 that tells nothing about the inside.
+ * a database that cannot be reached is a 503 `database_unavailable` (a retry may work); anything
+ * else is logged and answered as a 500 that tells nothing about the inside.
  */
 @Catch()
 export class ApiExceptionFilter implements ExceptionFilter {
@@ -70,6 +89,13 @@ export class ApiExceptionFilter implements ExceptionFilter {
         statusCode: status,
         code: codeByStatus[status] ?? 'bad_request',
         message: (exception as Error).message || 'The request could not be read.',
+      };
+    }
+    if (isDatabaseUnavailable(exception)) {
+      return {
+        statusCode: HttpStatus.SERVICE_UNAVAILABLE,
+        code: 'database_unavailable',
+        message: 'Mixmark cannot reach its database just now. Please try again in a moment.',
       };
     }
     return {

@@ -1,0 +1,12 @@
+// Types for `throwaway-cluster.mjs`, for the TypeScript e2e tests.
+export interface ThrowawayCluster {
+  /** A new database with every migration applied; resolves to its URL. */
+  migratedDatabase(name: string): Promise<string>;
+  /** Stops the server (fast shutdown: open connections are cut). */
+  stop(): Promise<void>;
+  start(): Promise<void>;
+  /** Stops the server and deletes its folder. */
+  remove(): Promise<void>;
+}
+
+export function startThrowawayCluster(): Promise<ThrowawayCluster>;
