@@ -2,8 +2,9 @@ import Paper from '@mui/material/Paper';
 import { ErrorAlert } from '@/components/ui/error-alert';
 import { Loading } from '@/components/ui/loading';
 import { PageHeader } from '@/components/ui/page-header';
-import { useProfile } from '@/features/account/api/get-profile';
+import { getProfileQueryOptions, useProfile } from '@/features/account/api/get-profile';
 import { AccountForm } from '@/features/account/components/account-form';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function AccountRoute() {
   const profile = useProfile();
@@ -25,3 +26,6 @@ export default function AccountRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student', 'teacher', 'admin'], (queryClient) => [queryClient.ensureQueryData(getProfileQueryOptions())]);

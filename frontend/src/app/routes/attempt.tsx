@@ -14,6 +14,8 @@ import { AttemptResult } from '@/features/attempts/components/attempt-result';
 import { OverrideForm } from '@/features/attempts/components/override-form';
 import { isPending } from '@/features/attempts/types';
 import { useUser } from '@/lib/auth-store';
+import { getAttemptQueryOptions } from '@/features/attempts/api/get-attempt';
+import { prefetchLoader } from '@/lib/route-loader';
 
 /** A student's result, or for the teacher the same with the photo and the override form. */
 export default function AttemptRoute() {
@@ -70,3 +72,8 @@ export default function AttemptRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student', 'teacher', 'admin'], (queryClient, { params }) => [
+  queryClient.ensureQueryData(getAttemptQueryOptions(params.attemptId ?? '')),
+]);

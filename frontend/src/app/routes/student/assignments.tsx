@@ -4,6 +4,8 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { StudentAssignmentList } from '@/features/assignments/components/student-assignment-list';
 import { useUser } from '@/lib/auth-store';
+import { getAssignmentsQueryOptions } from '@/features/assignments/api/get-assignments';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function StudentAssignmentsRoute() {
   const user = useUser();
@@ -29,3 +31,6 @@ export default function StudentAssignmentsRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student'], (queryClient) => [queryClient.ensureQueryData(getAssignmentsQueryOptions())]);

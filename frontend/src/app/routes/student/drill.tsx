@@ -14,6 +14,8 @@ import { PhotoGuide } from '@/features/drills/components/photo-guide';
 import { ReferenceCard } from '@/features/drills/components/reference-card';
 import { TargetSwatches } from '@/features/drills/components/target-swatches';
 import { kindWords } from '@/features/drills/types';
+import { getDrillQueryOptions } from '@/features/drills/api/get-drill';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function StudentDrillRoute() {
   const { drillId = '' } = useParams();
@@ -83,3 +85,8 @@ export default function StudentDrillRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student'], (queryClient, { params }) => [
+  queryClient.ensureQueryData(getDrillQueryOptions(params.drillId ?? '')),
+]);

@@ -1,6 +1,8 @@
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { AttemptList } from '@/features/attempts/components/attempt-list';
+import { getAttemptsQueryOptions } from '@/features/attempts/api/get-attempts';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function HistoryRoute() {
   return (
@@ -10,3 +12,6 @@ export default function HistoryRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student'], (queryClient) => [queryClient.ensureQueryData(getAttemptsQueryOptions())]);

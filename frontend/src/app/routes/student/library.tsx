@@ -3,6 +3,8 @@ import { Link as RouterLink } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { DrillList } from '@/features/drills/components/drill-list';
+import { getDrillsQueryOptions } from '@/features/drills/api/get-drills';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function PracticeLibraryRoute() {
   return (
@@ -20,3 +22,8 @@ export default function PracticeLibraryRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student'], (queryClient) => [
+  queryClient.ensureQueryData(getDrillsQueryOptions({ scope: 'library' })),
+]);

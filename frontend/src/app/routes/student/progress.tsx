@@ -3,6 +3,8 @@ import { Loading } from '@/components/ui/loading';
 import { PageHeader } from '@/components/ui/page-header';
 import { useMyProgress } from '@/features/progress/api/get-my-progress';
 import { ProgressSummary } from '@/features/progress/components/progress-summary';
+import { getMyProgressQueryOptions } from '@/features/progress/api/get-my-progress';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function StudentProgressRoute() {
   const progress = useMyProgress();
@@ -15,3 +17,6 @@ export default function StudentProgressRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['student'], (queryClient) => [queryClient.ensureQueryData(getMyProgressQueryOptions())]);

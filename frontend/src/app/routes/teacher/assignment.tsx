@@ -6,6 +6,8 @@ import { paths } from '@/config/paths';
 import { useAssignment } from '@/features/assignments/api/get-assignment';
 import { dueWords } from '@/features/assignments/components/due-date';
 import { AttemptList } from '@/features/attempts/components/attempt-list';
+import { getAssignmentQueryOptions } from '@/features/assignments/api/get-assignment';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function TeacherAssignmentRoute() {
   const { assignmentId = '' } = useParams();
@@ -25,3 +27,8 @@ export default function TeacherAssignmentRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['teacher'], (queryClient, { params }) => [
+  queryClient.ensureQueryData(getAssignmentQueryOptions(params.assignmentId ?? '')),
+]);

@@ -16,6 +16,11 @@ import { InviteForm } from '@/features/classes/components/invite-form';
 import { RosterTable } from '@/features/classes/components/roster-table';
 import { useClassProgress } from '@/features/progress/api/get-class-progress';
 import { ProgressSummary } from '@/features/progress/components/progress-summary';
+import { getAssignmentsQueryOptions } from '@/features/assignments/api/get-assignments';
+import { getClassQueryOptions } from '@/features/classes/api/get-class';
+import { getRosterQueryOptions } from '@/features/classes/api/get-roster';
+import { getClassProgressQueryOptions } from '@/features/progress/api/get-class-progress';
+import { prefetchLoader } from '@/lib/route-loader';
 
 function ClassProgress({ classId }: { classId: string }) {
   const progress = useClassProgress({ id: classId });
@@ -90,3 +95,14 @@ export default function TeacherClassRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['teacher'], (queryClient, { params }) => {
+  const classId = params.classId ?? '';
+  return [
+    queryClient.ensureQueryData(getClassQueryOptions(classId)),
+    queryClient.ensureQueryData(getRosterQueryOptions(classId)),
+    queryClient.ensureQueryData(getAssignmentsQueryOptions({ classId })),
+    queryClient.ensureQueryData(getClassProgressQueryOptions(classId)),
+  ];
+});

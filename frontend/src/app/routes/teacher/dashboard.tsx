@@ -7,6 +7,9 @@ import { paths } from '@/config/paths';
 import { TeacherAssignmentList } from '@/features/assignments/components/teacher-assignment-list';
 import { ClassList } from '@/features/classes/components/class-list';
 import { CreateClassForm } from '@/features/classes/components/create-class-form';
+import { getAssignmentsQueryOptions } from '@/features/assignments/api/get-assignments';
+import { getClassesQueryOptions } from '@/features/classes/api/get-classes';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function TeacherDashboardRoute() {
   return (
@@ -40,3 +43,9 @@ export default function TeacherDashboardRoute() {
     </Stack>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['teacher'], (queryClient) => [
+  queryClient.ensureQueryData(getClassesQueryOptions()),
+  queryClient.ensureQueryData(getAssignmentsQueryOptions()),
+]);

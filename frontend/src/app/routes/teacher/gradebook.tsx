@@ -6,6 +6,8 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useGradebook } from '@/features/assignments/api/get-gradebook';
 import { GradebookTable } from '@/features/assignments/components/gradebook-table';
+import { getGradebookQueryOptions } from '@/features/assignments/api/get-gradebook';
+import { prefetchLoader } from '@/lib/route-loader';
 
 export default function TeacherGradebookRoute() {
   const { classId = '' } = useParams();
@@ -27,3 +29,8 @@ export default function TeacherGradebookRoute() {
     </>
   );
 }
+
+/** Fills the cache before the page shows (see lib/route-loader.ts). */
+export const loader = prefetchLoader(['teacher'], (queryClient, { params }) => [
+  queryClient.ensureQueryData(getGradebookQueryOptions(params.classId ?? '')),
+]);
