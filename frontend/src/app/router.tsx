@@ -5,6 +5,7 @@ import { AppLayout } from '@/components/layouts/app-layout';
 import { paths } from '@/config/paths';
 import { refreshSession } from '@/lib/api-client';
 import { authStore } from '@/lib/auth-store';
+import { Loading } from '@/components/ui/loading';
 import { RequireRole } from '@/lib/authorization';
 import type { RouteLoader } from '@/lib/route-loader';
 import { NavigationProgress } from './navigation-progress';
@@ -36,6 +37,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         </>
       ),
       errorElement: <RouteError />,
+      // The first page load, while a page's code arrives (its loader does not wait then).
+      hydrateFallbackElement: <Loading label="Opening Mixmark…" />,
       children: [
         lazyRoute(paths.home.path, () => import('./routes/landing')),
         lazyRoute(paths.status.path, () => import('./routes/status')),

@@ -318,7 +318,17 @@ export function GradebookTable({ book }: { book: Gradebook }) {
               getItemAriaLabel={(type) => `Go to the ${type} page of students`}
               showFirstButton
               showLastButton
-              sx={{ borderTop: 1, borderColor: 'divider' }}
+              sx={{
+                borderTop: 1,
+                borderColor: 'divider',
+                // On a phone the page buttons go to a line of their own rather than off the edge.
+                '& .MuiTablePagination-toolbar': {
+                  flexWrap: 'wrap',
+                  rowGap: 0.5,
+                  px: { xs: 1, sm: 2 },
+                },
+                '& .MuiTablePagination-spacer': { display: { xs: 'none', sm: 'block' } },
+              }}
             />
           )}
         </Paper>
