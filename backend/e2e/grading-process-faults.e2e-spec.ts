@@ -12,27 +12,13 @@ import { listMessages } from '../../scripts/lib/fake-smtp.mjs';
 import { dataSourceOptions } from '../src/database/data-source';
 import { renderScene } from '../src/measurement/testing/photo-scene';
 import { createTestApp } from './create-test-app';
-import { registerAccount, testPassword, type TestAccount } from './helpers';
+import { registerAccount, testPassword, withEnv, type TestAccount } from './helpers';
 import { startThrowawayCluster, type ThrowawayCluster } from './throwaway-cluster.mjs';
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 const built = (file: string) => [resolve('dist', file), resolve('backend/dist', file)].find((p) => existsSync(p)) ?? resolve('dist', file);
 const workerPath = built('worker.js');
 const serverPath = built('main.js');
-
-/** Sets environment variables while `fn` runs (the app reads its config when it is made). */
-async function withEnv<T>(vars: Record<string, string>, fn: () => Promise<T>): Promise<T> {
-  const saved = Object.fromEntries(Object.keys(vars).map((key) => [key, process.env[key]]));
-  Object.assign(process.env, vars);
-  try {
-    return await fn();
-  } finally {
-    for (const [key, value] of Object.entries(saved)) {
-      if (value === undefined) delete process.env[key];
-      else process.env[key] = value;
-    }
-  }
-}
 
 async function until<T>(what: string, probe: () => Promise<T | undefined | false>, timeoutMs = 60_000, everyMs = 100): Promise<T> {
   const deadline = Date.now() + timeoutMs;

@@ -34,3 +34,17 @@ export async function latestMailTo(address: string, timeoutMs = 5000) {
   }
   throw new Error(`no mail to ${address} arrived within ${timeoutMs} ms`);
 }
+
+/** Sets environment variables while `fn` runs (an app reads its config when it is made), then puts them back. */
+export async function withEnv<T>(vars: Record<string, string>, fn: () => Promise<T>): Promise<T> {
+  const saved = Object.fromEntries(Object.keys(vars).map((key) => [key, process.env[key]]));
+  Object.assign(process.env, vars);
+  try {
+    return await fn();
+  } finally {
+    for (const [key, value] of Object.entries(saved)) {
+      if (value === undefined) delete process.env[key];
+      else process.env[key] = value;
+    }
+  }
+}

@@ -10,3 +10,6 @@ export interface ThrowawayCluster {
 }
 
 export function startThrowawayCluster(): Promise<ThrowawayCluster>;
+
+/** A migrated database of the test's own on the shared e2e server; resolves to its URL. */
+export function migratedTestDatabase(name: string): Promise<string>;
