@@ -114,9 +114,11 @@ describe('measurement accuracy on synthetic photos', () => {
     expect(summary().median).toBeLessThanOrEqual(1.0);
   });
 
-  // Known gap: issue 4 asks for a 95th percentile ≤ 2.0; this method reaches about 2.7 (light
-  // swatches under the warm cast with vignetting; see docs/measurement.md). Until the curved
-  // light model lands, this guards what is reached so that it cannot get worse unnoticed.
+  // Known gap: issue 4 asks for a 95th percentile ≤ 2.0; this suite reads 2.69 (and 2.02 over
+  // 216 readings from three seed sets). The misses are JPEG's, not the light model's: the
+  // same scenes saved at quality 100 read p95 0.73, and with vignetting off the worst
+  // readings do not move (see docs/measurement.md). This guards what is reached so that it
+  // cannot get worse unnoticed.
   it('keeps the 95th percentile ΔE00 at or under 3.0 (issue 4 target 2.0 not yet met)', () => {
     expect(quantile(errors, 0.95)).toBeLessThanOrEqual(3.0);
   });
