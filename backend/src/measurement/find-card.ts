@@ -4,6 +4,12 @@ import { buildCardLayout } from '../cards/card-layout';
 import type { CardLayout, CardMarker } from '../cards/card-layout.types';
 import { decodeCardPayload, type CardPayload } from '../cards/card-payload';
 import {
+  findFinderPatterns,
+  greyReduced,
+  groupQrCandidates,
+  type QrCandidate,
+} from './find-finder-patterns';
+import {
   applyHomography,
   fitHomography,
   refineHomography,
@@ -154,31 +160,54 @@ function fitAll(hits: MarkerHit[]): { h: Homography; points: number; rms: number
   return { h, points: card.length, rms: reprojectionError(h, card, image) };
 }
 
+/** jsQR's resolution for a crop whose modules are `module` working pixels: reduced when
+ * they are large (faster), doubled when small (it needs about three pixels a module). */
+const factorFor = (module: number): number => (module >= 8 ? 2 : module < 3.5 ? 0.5 : 1);
+
 /**
- * Finds the reference card: reads one QR corner marker on a half-size grey copy (jsQR is
- * fast and reliable there; see STACK.md "Image pipeline traps"), or in tiles of the working
- * raster when the card is small; then predicts each other marker from the homography fitted
- * so far, reads it in a crop at working resolution, and refits with every point read
- * (least squares, then refined on the reprojection error). The first marker is re-read at
- * working resolution too. Works at any rotation: each QR code knows its own orientation and
- * says which corner it is.
- *
- * @param raster - the working raster (upright, sRGB)
- * @returns the detection, or undefined when no Mixmark marker is readable
+ * The first readable marker: finder patterns are found by their run ratio on a grey copy
+ * (half size for large rasters, then full size), and jsQR reads only a crop around each
+ * group of them. When that reads nothing (a marker badly blurred or cut, or a finder
+ * missed), jsQR runs on overlapping half-frame tiles as before: slower, but it stays the
+ * last resort for photos the scanner cannot help.
  */
-export function findCard(raster: Raster8): CardDetection | undefined {
+function firstMarker(raster: Raster8): {
+  read?: NonNullable<ReturnType<typeof readMarker>>;
+  precise: boolean;
+  candidates: QrCandidate[];
+} {
   const { width, height } = raster;
+  const tried: QrCandidate[] = [];
+  for (const reduce of Math.max(width, height) > 1100 ? [2, 1] : [1]) {
+    const finders = findFinderPatterns(greyReduced(raster, reduce));
+    for (const c of groupQrCandidates(finders, reduce, width, height)) {
+      // A group already tried at the coarser scale is not decoded again.
+      if (
+        tried.some(
+          (t) =>
+            t.x0 <= c.x0 + 2 * c.module &&
+            t.x1 >= c.x1 - 2 * c.module &&
+            t.y0 <= c.y0 + 2 * c.module &&
+            t.y1 >= c.y1 - 2 * c.module,
+        )
+      )
+        continue;
+      tried.push(c);
+      const factor = factorFor(c.module);
+      const read = readMarker(raster, c.x0, c.y0, c.x1 - c.x0, c.y1 - c.y0, factor);
+      if (read) return { read, precise: factor <= 1, candidates: tried };
+    }
+  }
   // jsQR reads one code per call and gets lost when several are in view (all four corners
   // of the card), so it is run on overlapping tiles, each half the frame a side: most hold
   // one marker whole. First on a half-size copy (fast), then at working size (small cards).
-  let first: ReturnType<typeof readMarker>;
   const reduce = Math.max(width, height) > 1100 ? 2 : 1;
   for (const factor of reduce === 2 ? [2, 1] : [1]) {
     const tw = Math.floor(width / 2);
     const th = Math.floor(height / 2);
-    for (let j = 0; !first && j < 3; j++) {
-      for (let i = 0; !first && i < 3; i++) {
-        first = readMarker(
+    for (let j = 0; j < 3; j++) {
+      for (let i = 0; i < 3; i++) {
+        const read = readMarker(
           raster,
           Math.floor((i * width) / 4),
           Math.floor((j * height) / 4),
@@ -186,10 +215,32 @@ export function findCard(raster: Raster8): CardDetection | undefined {
           th,
           factor,
         );
+        if (read) return { read, precise: factor === 1, candidates: tried };
       }
     }
-    if (first) break;
   }
+  return { precise: false, candidates: tried };
+}
+
+const overlap = (a: { x0: number; y0: number; x1: number; y1: number }, b: typeof a): number =>
+  Math.max(0, Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0)) *
+  Math.max(0, Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0));
+
+/**
+ * Finds the reference card: finds QR finder patterns by their run ratio on a grey copy and
+ * reads the first marker with jsQR in a crop around them (tiles of the frame as a last
+ * resort); then reads each other marker in the crop of the finder group at its predicted
+ * place (or the predicted box itself) at working resolution, and refits with every point
+ * read (least squares, then refined on the reprojection error). Works at any rotation: each
+ * QR code knows its own orientation and says which corner it is.
+ *
+ * @param raster - the working raster (upright, sRGB)
+ * @returns the detection, or undefined when no Mixmark marker is readable
+ */
+export function findCard(raster: Raster8): CardDetection | undefined {
+  const { width, height } = raster;
+  const found = firstMarker(raster);
+  const first = found.read;
   if (!first) return undefined;
   const { payload } = first;
   let layout: CardLayout;
@@ -215,6 +266,8 @@ export function findCard(raster: Raster8): CardDetection | undefined {
   const start = payload.corner;
   const order = [start, (start + 1) % 4, (start + 3) % 4, (start + 2) % 4];
   for (const corner of order) {
+    // A first marker read at working resolution is not read again.
+    if (corner === start && found.precise) continue;
     const marker = layout.markers[corner];
     const box = predictedBox(fit.h, marker, 6);
     const x0 = Math.max(0, Math.floor(box.x0));
@@ -222,10 +275,27 @@ export function findCard(raster: Raster8): CardDetection | undefined {
     const x1 = Math.min(width, Math.ceil(box.x1));
     const y1 = Math.min(height, Math.ceil(box.y1));
     if (x1 - x0 < 24 || y1 - y0 < 24) continue;
-    const read =
+    const matches = (read: ReturnType<typeof readMarker>): boolean =>
+      !!read && read.payload.id === payload.id && read.payload.corner === corner;
+    // Where the finder scan saw a symbol, its own box comes first: a homography fitted to
+    // one marker extrapolates poorly to the far corners of the card.
+    const seen = found.candidates
+      .filter((c) => overlap(c, { x0, y0, x1, y1 }) > 0)
+      .sort((a, b) => overlap(b, { x0, y0, x1, y1 }) - overlap(a, { x0, y0, x1, y1 }));
+    let read: ReturnType<typeof readMarker>;
+    for (const c of seen) {
+      // A tilted card squeezes the modules one way: small ones are also tried doubled.
+      for (const factor of c.module < 5 ? [1, 0.5] : [Math.min(1, factorFor(c.module))]) {
+        read = readMarker(raster, c.x0, c.y0, c.x1 - c.x0, c.y1 - c.y0, factor);
+        if (matches(read)) break;
+        read = undefined;
+      }
+      if (read) break;
+    }
+    read ??=
       readMarker(raster, x0, y0, x1 - x0, y1 - y0, 1) ??
       readMarker(raster, x0, y0, x1 - x0, y1 - y0, 0.5);
-    if (read && read.payload.id === payload.id && read.payload.corner === corner) {
+    if (read && matches(read)) {
       addHit(read);
       fit = fitAll([...hits.values()]) ?? fit;
     }

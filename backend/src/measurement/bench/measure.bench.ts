@@ -5,6 +5,10 @@
  * The photos are made here with sharp (the card PNG, turned and placed on a noisy table);
  * the test scene generator lives under testing/ and is not part of the build.
  */
+import { execFile } from 'node:child_process';
+import { mkdtemp, readFile, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import sharp from 'sharp';
 import { buildCardLayout } from '../../cards/card-layout';
 import { renderCardPng } from '../../cards/render-card-png';
@@ -86,17 +90,70 @@ async function bench(label: string, width: number, height: number, runs: number)
   );
 }
 
+/** Child mode: measures one photo file `runs` times in a fresh process and prints the wall
+ * time and the process's peak RSS (so the figure is the measurement's own, not the bench's). */
+async function child(file: string, runs: number): Promise<void> {
+  sharp.concurrency(1);
+  const bytes = await readFile(file);
+  const t = performance.now();
+  let ok = true;
+  for (let i = 0; i < runs; i++) ok &&= (await measurePhoto(bytes)).result.ok;
+  const ms = performance.now() - t;
+  // VmHWM is this process's own peak (Linux); getrusage's maxRSS is not used here because
+  // Linux carries the forking parent's peak over into the child's.
+  const status = await readFile('/proc/self/status', 'utf8').catch(() => '');
+  const hwm = /VmHWM:\s+(\d+) kB/.exec(status);
+  const maxRssMb = (hwm ? Number(hwm[1]) : process.resourceUsage().maxRSS) / 1024;
+  process.stdout.write(JSON.stringify({ ms, ok, maxRssMb }) + '\n');
+}
+
+type ChildReport = { ms: number; ok: boolean; maxRssMb: number };
+
+function runChild(file: string, runs: number): Promise<ChildReport> {
+  return new Promise((done, fail) => {
+    execFile(process.execPath, [__filename, '--child', file, String(runs)], (error, stdout) =>
+      error ? fail(error) : done(JSON.parse(stdout) as ChildReport),
+    );
+  });
+}
+
+/** Peak memory of one photo in its own process, and the throughput of one process against
+ * two at once (two cores): photos per second, each process measuring `runs` photos. */
+async function processes(label: string, width: number, height: number, runs: number) {
+  const folder = await mkdtemp(join(tmpdir(), 'mixmark-bench-'));
+  const file = join(folder, 'photo.jpg');
+  await writeFile(file, await photo(width, height));
+  const empty = await runChild(file, 0);
+  const one = await runChild(file, 1);
+  const single = await runChild(file, runs);
+  const t = performance.now();
+  const pair = await Promise.all([runChild(file, runs), runChild(file, runs)]);
+  const pairMs = performance.now() - t;
+  const perSecond = (photos: number, ms: number): number => (1000 * photos) / ms;
+  const alone = perSecond(runs, single.ms);
+  const together = perSecond(2 * runs, pairMs);
+  console.log(
+    `${label}: peak RSS of a process measuring one photo ${one.maxRssMb.toFixed(0)} MB ` +
+      `(${(one.maxRssMb - empty.maxRssMb).toFixed(0)} MB above the same process measuring none, ${empty.maxRssMb.toFixed(0)} MB); ` +
+      `throughput one process ${alone.toFixed(2)} photos/s, two processes at once ${together.toFixed(2)} photos/s ` +
+      `(${(together / alone).toFixed(2)}×; ${runs} photos each, start-up included)${[one, single, ...pair].every((r) => r.ok) ? '' : ' WITH ERRORS'}`,
+  );
+}
+
 async function main(): Promise<void> {
   sharp.concurrency(1);
   const before = process.memoryUsage().rss;
   await bench('12 MP', 4032, 3024, 7);
   await bench('48 MP', 8064, 6048, 3);
   console.log(
-    `peak RSS of the process ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (started at ${(before / 1048576).toFixed(0)} MB; includes making the test photos); one libvips thread`,
+    `peak RSS of the bench process ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (started at ${(before / 1048576).toFixed(0)} MB; includes making the test photos); one libvips thread`,
   );
+  await processes('12 MP', 4032, 3024, 6);
+  await processes('48 MP', 8064, 6048, 3);
 }
 
-main().catch((error: unknown) => {
+const argv = process.argv.slice(2);
+(argv[0] === '--child' ? child(argv[1], Number(argv[2])) : main()).catch((error: unknown) => {
   console.error(error);
   process.exit(1);
 });
