@@ -16,7 +16,7 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
   let app: INestApplication;
   let http: ReturnType<INestApplication['getHttpServer']>;
   const accounts = {} as Record<Exclude<Who, 'anonymous'>, TestAccount>;
-  const ids = {} as { classId: string; drillId: string; assignmentId: string; attemptId: string };
+  const ids = {} as { classId: string; drillId: string; assignmentId: string; attemptId: string; paintId: string };
 
   beforeAll(async () => {
     app = await createTestApp();
@@ -49,6 +49,8 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
       [accounts.student.id, ids.drillId, ids.assignmentId],
     );
     ids.attemptId = row.id;
+    const paint = await request(http).post('/api/palette/paints').set(accounts.student.auth).send({ name: 'Matrix blue', pigments: ['PB29'] }).expect(201);
+    ids.paintId = paint.body.id;
   });
   afterAll(async () => {
     await app.close();
@@ -88,6 +90,15 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
     { method: 'get', path: () => '/api/progress/me', expect: statuses(401, 200, 200, 200, 200, 200) },
     { method: 'get', path: () => `/api/progress/students/${accounts.student.id}`, expect: statuses(401, 403, 403, 200, 404, 200) },
     { method: 'get', path: () => `/api/progress/classes/${ids.classId}`, expect: statuses(401, 403, 403, 200, 404, 200) },
+    { method: 'get', path: () => `/api/drills/${ids.drillId}/card.pdf`, expect: statuses(401, 200, 404, 200, 404, 200) },
+    { method: 'get', path: () => `/api/drills/${ids.drillId}/card.png`, expect: statuses(401, 200, 404, 200, 404, 200) },
+    // Without a photo: the role check comes first (403), then the missing file (400).
+    { method: 'post', path: () => '/api/drills/targets/measure', expect: statuses(401, 403, 403, 400, 400, 400) },
+    { method: 'post', path: () => '/api/attempts', expect: statuses(401, 400, 400, 403, 403, 400) },
+    { method: 'get', path: () => '/api/palette', expect: statuses(401, 200, 200, 200, 200, 200) },
+    { method: 'post', path: () => '/api/palette/swatch/measure', expect: statuses(401, 400, 400, 400, 400, 400) },
+    // A paint is its owner's alone: everyone else gets a 404, admins included.
+    { method: 'put', path: () => `/api/palette/paints/${ids.paintId}`, body: () => ({ name: 'Matrix blue', pigments: ['PB29'] }), expect: statuses(401, 200, 404, 404, 404, 404) },
     { method: 'get', path: () => '/api/admin/users', expect: statuses(401, 403, 403, 403, 403, 200) },
     { method: 'patch', path: () => `/api/admin/users/${accounts.otherStudent.id}/role`, body: () => ({ role: 'student' }), expect: statuses(401, 403, 403, 403, 403, 200) },
   ];

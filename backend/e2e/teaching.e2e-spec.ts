@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { INestApplication } from '@nestjs/common';
-import { hexToLab } from '@mixmark/common';
+import { deltaE2000, hexToLab } from '@mixmark/common';
 import request from 'supertest';
 import { createTestApp } from './create-test-app';
 import { latestMailTo, registerAccount, testPassword, type TestAccount } from './helpers';
@@ -238,7 +238,39 @@ describe('targets from the teacher\'s own swatch (e2e)', () => {
     expect(response.body.cardKind).toBe('match');
     expect(response.body.targets).toHaveLength(1);
     expect(Math.abs(response.body.targets[0].lab.L - painted.L)).toBeLessThan(3);
-    const blank = await request(http).post('/api/drills/targets/measure').set(teacher.auth).attach('photo', Buffer.from('nope'), 'x.jpg').expect(422);
-    expect(blank.body.code).toMatch(/^FILE_/);
+    // A text file named .jpg is not a photo: 415, as for attempts (issue 5, "wrong type (415)").
+    const blank = await request(http).post('/api/drills/targets/measure').set(teacher.auth).attach('photo', Buffer.from('nope'), 'x.jpg').expect(415);
+    expect(blank.body).toMatchObject({ statusCode: 415, code: 'FILE_UNREADABLE', details: { photo: 'FILE_UNREADABLE' } });
+  }, 120_000);
+
+  it('should read the swatch of a paint for the palette, and answer a photo without a card in words', async () => {
+    const { renderScene } = await import('../src/measurement/testing/photo-scene.js');
+    const paint = { L: 44, a: 38, b: 30 };
+    const student = await registerAccount(app, 'student');
+    const http = app.getHttpServer();
+    const { jpeg } = await renderScene({
+      kind: 'match', swatches: [paint], width: 1600, height: 1200, cardFraction: 0.5, rotation: -20, tiltX: -4, tiltY: 5,
+      ev: -0.5, cast: 'warm', crossTalk: 0.01, flare: 0.01, vignetting: 0.1, noise: 1.5, jpegQuality: 88, seed: 8,
+    });
+    const measured = await request(http).post('/api/palette/swatch/measure').set(student.auth).attach('photo', jpeg, 'paint.jpg').expect(200);
+    expect(measured.body.cardKind).toBe('match');
+    expect(measured.body.swatches).toHaveLength(1);
+    // Within the accuracy suite's median-to-p95 band (issue 4: median ΔE00 ≤ 1, p95 ≤ 2); 3 leaves room for one scene.
+    expect(deltaE2000(measured.body.swatches[0].lab, paint)).toBeLessThan(3);
+    // The reading goes into the paint through the ordinary palette route.
+    const saved = await request(http)
+      .post('/api/palette/paints')
+      .set(student.auth)
+      .send({ name: 'Warm earth mix', pigments: ['PR101'], swatchLab: measured.body.swatches[0].lab })
+      .expect(201);
+    expect(saved.body.swatchLab.L).toBeCloseTo(measured.body.swatches[0].lab.L, 5);
+
+    // A photo with no card: 422 with the quality code and a sentence to act on.
+    const { default: sharp } = await import('sharp');
+    const plain = await sharp({ create: { width: 800, height: 600, channels: 3, background: '#8a7f70' } }).jpeg().toBuffer();
+    const none = await request(http).post('/api/palette/swatch/measure').set(student.auth).attach('photo', plain, 'wall.jpg').expect(422);
+    expect(none.body).toMatchObject({ statusCode: 422, code: 'CARD_NOT_FOUND', details: { photo: 'CARD_NOT_FOUND' } });
+    expect(none.body.message.length).toBeGreaterThan(20);
+    await request(http).post('/api/palette/swatch/measure').set(student.auth).expect(400);
   }, 120_000);
 });
