@@ -187,6 +187,23 @@ describe('reference cards of drills (e2e)', () => {
     expect(Buffer.from(png.body).subarray(1, 4).toString()).toBe('PNG');
     await request(http).get(`/api/drills/${drill.body.id}/card.pdf`).set(stranger.auth).expect(404);
   });
+
+  it('should serve a card by kind for a drill not saved yet, and refuse kinds and step counts that do not exist', async () => {
+    const http = app.getHttpServer();
+    const student = await registerAccount(app, 'student');
+    const pdf = await request(http).get('/api/cards/value-ladder/card.pdf?steps=7').set(student.auth).buffer(true).expect(200);
+    expect(pdf.headers['content-disposition']).toContain('mixmark-card-value-ladder-a4.pdf');
+    // A4 is 210 × 297 mm = 595.28 × 841.89 points (ISO 216; 72 points to the inch).
+    expect(Buffer.from(pdf.body).toString('latin1')).toMatch(/\/MediaBox \[0 0 595\.2\d* 841\.8\d*\]/);
+    const png = await request(http).get('/api/cards/temperature-pair/card.png').set(student.auth).buffer(true).expect(200);
+    expect(Buffer.from(png.body).subarray(1, 4).toString()).toBe('PNG');
+    const unknown = await request(http).get('/api/cards/rainbow/card.pdf').set(student.auth).expect(400);
+    expect(unknown.body).toMatchObject({ code: 'card_kind_unknown', details: { kind: 'oneOf' } });
+    const tooMany = await request(http).get('/api/cards/value-ladder/card.pdf?steps=12').set(student.auth).expect(400);
+    expect(tooMany.body).toMatchObject({ code: 'card_steps_invalid', details: { steps: 'invalid' } });
+    await request(http).get('/api/cards/match/card.pdf?steps=3').set(student.auth).expect(400);
+    await request(http).get('/api/cards/match/card.pdf').expect(401);
+  });
 });
 
 describe('my palette (e2e)', () => {
