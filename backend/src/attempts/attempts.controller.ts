@@ -6,6 +6,7 @@ import { CurrentUser, type AuthUser } from '../common/decorators/current-user.de
 import { Roles } from '../common/decorators/roles.decorator';
 import { parseId } from '../common/pipes/parse-id.pipe';
 import { SchemaValidationPipe } from '../common/pipes/schema-validation.pipe';
+import { photoContentType } from '../storage/storable-photo';
 import type { AttemptView } from './attempt-view';
 import { AttemptsService } from './attempts.service';
 
@@ -47,8 +48,9 @@ export class AttemptsController {
 
   @Get(':id/photo')
   async photo(@CurrentUser() caller: AuthUser, @Param('id', parseId()) id: string, @Res() response: Response): Promise<void> {
-    response.type('image/jpeg').setHeader('cache-control', 'private, max-age=86400');
-    response.send(await this.attemptsService.image(caller, id, 'photo'));
+    const bytes = await this.attemptsService.image(caller, id, 'photo');
+    response.type(photoContentType(bytes)).setHeader('cache-control', 'private, max-age=86400');
+    response.send(bytes);
   }
 
   @Get(':id/overlay')

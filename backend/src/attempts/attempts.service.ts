@@ -20,9 +20,10 @@ import { Drill } from '../drills/entities/drill.entity';
 import { GradingQueue } from '../grading/grading-queue.service';
 import { MailService } from '../mail/mail.service';
 import { attemptMarkedMail } from '../mail/templates';
-import { checkPhoto, sanitisePhoto, sniffImageType } from '../measurement/decode-photo';
+import { sniffImageType } from '../measurement/decode-photo';
 import { PhotoFileError } from '../measurement/measurement-issue';
 import { PhotoStorage } from '../storage/photo-storage';
+import { storablePhoto, type StorablePhoto } from '../storage/storable-photo';
 import { User } from '../users/entities/user.entity';
 import { toAttemptView, type AttemptView } from './attempt-view';
 import { Attempt } from './entities/attempt.entity';
@@ -51,9 +52,10 @@ export class AttemptsService {
   ) {}
 
   /**
-   * Takes a photo for a drill or an assignment: checks it by its bytes, stores a copy without
-   * metadata, and records the attempt and its grading job in one transaction (nothing is left
-   * half-written when the database fails midway; the stored copy is then removed).
+   * Takes a photo for a drill or an assignment: checks it by its bytes, stores the original with
+   * its metadata stripped (in its own format, pixels untouched: `storablePhoto`), and records the
+   * attempt and its grading job in one transaction (nothing is left half-written when the
+   * database fails midway; the stored copy is then removed).
    */
   async create(student: AuthUser, input: CreateAttemptInput, file: Express.Multer.File | undefined): Promise<AttemptView> {
     if (!file || file.size === 0) {
@@ -68,21 +70,20 @@ export class AttemptsService {
     }
     const drill = await this.drillsService.findVisible(student, drillId!);
     const maxBytes = this.configService.getOrThrow('storage.uploadMaxBytes', { infer: true });
-    let stored: Buffer;
+    let stored: StorablePhoto;
     try {
-      await checkPhoto(file.buffer, { maxBytes, maxPixels: 100_000_000 });
-      stored = await sanitisePhoto(file.buffer, { maxBytes, maxPixels: 100_000_000 });
+      stored = await storablePhoto(file.buffer, { maxBytes, maxPixels: 100_000_000 });
     } catch (error) {
       if (error instanceof PhotoFileError) throw this.fileError(error, file.buffer);
       throw error;
     }
 
     const id = randomUUID();
-    const photoKey = `attempts/${id}/photo.jpg`;
-    await this.storage.put(photoKey, stored);
+    const photoKey = `attempts/${id}/photo.${stored.extension}`;
+    await this.storage.put(photoKey, stored.bytes);
     try {
       await this.dataSource.transaction(async (manager) => {
-        await manager.insert(Attempt, { id, studentId: student.id, drillId: drill.id, assignmentId, photoKey, photoBytes: stored.length, state: 'queued' });
+        await manager.insert(Attempt, { id, studentId: student.id, drillId: drill.id, assignmentId, photoKey, photoBytes: stored.bytes.length, state: 'queued' });
         await this.gradingQueue.enqueue(id, {
           executeSql: async (text, values) => ({ rows: await manager.query(text, values) }),
         });

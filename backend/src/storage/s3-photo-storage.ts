@@ -9,7 +9,7 @@ import {
 import type { S3StorageConfig } from '../config/config.type';
 import { PhotoStorage } from './photo-storage';
 
-const contentTypes: Record<string, string> = { jpg: 'image/jpeg', jpeg: 'image/jpeg', png: 'image/png' };
+const contentTypes: Record<string, string> = { jpg: 'image/jpeg', jpeg: 'image/jpeg', png: 'image/png', webp: 'image/webp' };
 
 /**
  * Photos in an S3-compatible bucket (AWS S3, or any store speaking its API: set `endpoint` and,
