@@ -71,20 +71,30 @@ function scene(index: number, size: [number, number]): SceneOptions {
   };
 }
 
+/** Scenes in the suite: enough that the 95th percentile is not one or two readings (about
+ * 170 readings; over 33 it moved from 1.8 to 2.7 with the seeds). */
+const sceneCount = 64;
+
+/** Frame size by formula, not by outcome: every 25th scene (12, 37, 62) is a 12 MP photo,
+ * the rest alternate 900 × 1200 portrait and 1200 × 900 landscape. */
+const sizeOf = (index: number): [number, number] =>
+  index % 25 === 12 ? [4000, 3000] : index % 2 ? [1200, 900] : [900, 1200];
+
 describe('measurement accuracy on synthetic photos', () => {
   const errors: number[] = [];
-  const rows: string[] = [];
-  const sizes: [number, number][] = [
-    ...Array.from({ length: 12 }, (_, i): [number, number] => (i % 2 ? [1200, 900] : [900, 1200])),
-    [4000, 3000],
-  ];
+  const rows: [number, string][] = [];
 
-  it.each(sizes.map((size, i) => [i, size] as const))(
+  // Concurrent: a scene is drawn in this process while others are measured in the CLI's own
+  // processes, so two cores are both busy. The first CLI run builds the backend when stale;
+  // the others wait for it rather than all building at once.
+  const built = runMeasureCli(Buffer.from('not a photo')).catch(() => undefined);
+  it.concurrent.each(Array.from({ length: sceneCount }, (_, i) => [i, sizeOf(i)] as const))(
     'scene %i reads every window',
     async (index, size) => {
       const options = scene(index, size);
       for (const lab of options.swatches) expect(labToSrgb(lab).inGamut).toBe(true);
       const { jpeg, truth } = await renderScene(options);
+      await built;
       const { result, code } = await runMeasureCli(jpeg);
       expect(result.errors).toEqual([]);
       expect(code).toBe(0);
@@ -92,33 +102,36 @@ describe('measurement accuracy on synthetic photos', () => {
       for (const reading of result.readings) {
         const dE = deltaE2000(truth[reading.window], reading.lab);
         errors.push(dE);
-        rows.push(
+        rows.push([
+          index + reading.window / 100,
           `${index} ${options.kind} w${reading.window} ${options.cast} ev${options.ev.toFixed(2)} q${options.jpegQuality} ΔE00 ${dE.toFixed(2)}`,
-        );
+        ]);
       }
     },
-    240_000,
+    600_000,
   );
 
   const summary = (): { median: number; p95: number } => {
     const median = quantile(errors, 0.5);
     const p95 = quantile(errors, 0.95);
     console.log(
-      `${errors.length} readings: median ΔE00 ${median.toFixed(2)}, p95 ${p95.toFixed(2)}, max ${Math.max(...errors).toFixed(2)}\n${rows.join('\n')}`,
+      `${errors.length} readings: median ΔE00 ${median.toFixed(2)}, p95 ${p95.toFixed(2)}, max ${Math.max(...errors).toFixed(2)}\n${rows
+        .sort((a, b) => a[0] - b[0])
+        .map((r) => r[1])
+        .join('\n')}`,
     );
     return { median, p95 };
   };
 
   it('meets median ΔE00 ≤ 1.0 over the suite (issue 4)', () => {
-    expect(errors.length).toBeGreaterThan(30);
+    expect(errors.length).toBeGreaterThanOrEqual(150);
     expect(summary().median).toBeLessThanOrEqual(1.0);
   });
 
-  // Known gap: issue 4 asks for a 95th percentile ≤ 2.0; this suite reads 2.69 (and 2.02 over
-  // 216 readings from three seed sets). The misses are JPEG's, not the light model's: the
-  // same scenes saved at quality 100 read p95 0.73, and with vignetting off the worst
-  // readings do not move (see docs/measurement.md). This guards what is reached so that it
-  // cannot get worse unnoticed.
+  // Known gap: issue 4 asks for a 95th percentile ≤ 2.0; over these 64 scenes (182 readings,
+  // card layout v1) it reads 2.18. The misses are JPEG's rounding of flat areas, not the light
+  // model's: the same scenes saved at quality 100 read p95 0.73 (see docs/measurement.md).
+  // This guards what is reached so that it cannot get worse unnoticed.
   it('keeps the 95th percentile ΔE00 at or under 3.0 (issue 4 target 2.0 not yet met)', () => {
     expect(quantile(errors, 0.95)).toBeLessThanOrEqual(3.0);
   });
