@@ -8,12 +8,12 @@ import { ClassMember } from '../../classes/entities/class-member.entity';
 import { StudioClass } from '../../classes/entities/studio-class.entity';
 import { Drill } from '../../drills/entities/drill.entity';
 import { gradeMeasurement } from '../../grading/grade-photo';
-import { sanitisePhoto } from '../../measurement/decode-photo';
 import { measurePhoto } from '../../measurement/measure-photo';
 import { renderOverlay } from '../../measurement/render-overlay';
 import { casts, renderScene } from '../../measurement/testing/photo-scene';
 import { seededRandom } from '../../measurement/testing/seeded-random';
 import type { PhotoStorage } from '../../storage/photo-storage';
+import { storablePhoto } from '../../storage/storable-photo';
 import { User } from '../../users/entities/user.entity';
 import { demoClasses, demoDrills, studentHabits, type DemoDrill } from './demo-teaching';
 
@@ -114,9 +114,10 @@ export async function seedTeaching(dataSource: DataSource, storage: PhotoStorage
     const detail = await measurePhoto(jpeg);
     const outcome = gradeMeasurement(drill, detail.result);
     const id = randomUUID();
-    const photoKey = `attempts/${id}/photo.jpg`;
-    const stored = await sanitisePhoto(jpeg);
-    await storage.put(photoKey, stored);
+    // Stored as an upload is: the metadata walked out, the pixels untouched.
+    const stored = await storablePhoto(jpeg);
+    const photoKey = `attempts/${id}/photo.${stored.extension}`;
+    await storage.put(photoKey, stored.bytes);
     let overlayKey: string | null = null;
     if (detail.photo) {
       overlayKey = `attempts/${id}/overlay.png`;
@@ -130,7 +131,7 @@ export async function seedTeaching(dataSource: DataSource, storage: PhotoStorage
       assignmentId,
       photoKey,
       overlayKey,
-      photoBytes: stored.length,
+      photoBytes: stored.bytes.length,
       tries: 1,
       createdAt: when,
       gradedAt: new Date(when.getTime() + 20_000),
