@@ -175,12 +175,17 @@ function firstMarker(raster: Raster8): {
   read?: NonNullable<ReturnType<typeof readMarker>>;
   precise: boolean;
   candidates: QrCandidate[];
+  /** Every group the scan saw, at every scale scanned. */
+  groups: QrCandidate[];
 } {
   const { width, height } = raster;
   const tried: QrCandidate[] = [];
+  const groups: QrCandidate[] = [];
   for (const reduce of Math.max(width, height) > 1100 ? [2, 1] : [1]) {
     const finders = findFinderPatterns(greyReduced(raster, reduce));
-    for (const c of groupQrCandidates(finders, reduce, width, height)) {
+    const candidates = groupQrCandidates(finders, reduce, width, height);
+    groups.push(...candidates);
+    for (const c of candidates) {
       // A group already tried at the coarser scale is not decoded again.
       if (
         tried.some(
@@ -193,9 +198,15 @@ function firstMarker(raster: Raster8): {
       )
         continue;
       tried.push(c);
-      const factor = factorFor(c.module);
-      const read = readMarker(raster, c.x0, c.y0, c.x1 - c.x0, c.y1 - c.y0, factor);
-      if (read) return { read, precise: factor <= 1, candidates: tried };
+      // Only the payload of this read is needed when the scan saw the other symbols too
+      // (their geometry comes from their finders), so jsQR first gets the crop halved
+      // whenever that still leaves it three pixels a module: a quarter of the pixels.
+      const factors =
+        c.module >= 6 && factorFor(c.module) < 2 ? [2, factorFor(c.module)] : [factorFor(c.module)];
+      for (const factor of factors) {
+        const read = readMarker(raster, c.x0, c.y0, c.x1 - c.x0, c.y1 - c.y0, factor);
+        if (read) return { read, precise: factor <= 1, candidates: tried, groups };
+      }
     }
   }
   // jsQR reads one code per call and gets lost when several are in view (all four corners
@@ -215,16 +226,152 @@ function firstMarker(raster: Raster8): {
           th,
           factor,
         );
-        if (read) return { read, precise: factor === 1, candidates: tried };
+        if (read) return { read, precise: factor === 1, candidates: tried, groups };
       }
     }
   }
-  return { precise: false, candidates: tried };
+  return { precise: false, candidates: tried, groups };
 }
 
 const overlap = (a: { x0: number; y0: number; x1: number; y1: number }, b: typeof a): number =>
   Math.max(0, Math.min(a.x1, b.x1) - Math.max(a.x0, b.x0)) *
   Math.max(0, Math.min(a.y1, b.y1) - Math.max(a.y0, b.y0));
+
+/** Finder centres of a version 2 symbol, in modules: top-left, top-right, bottom-left
+ * (ISO/IEC 18004 §6.3.3). */
+const finderModules: [number, number][] = [
+  [3.5, 3.5],
+  [21.5, 3.5],
+  [3.5, 21.5],
+];
+
+/**
+ * The centre of a finder pattern at working resolution: the darkness-weighted centroid of
+ * the disc 2.5 modules across its centre, which holds the 3 × 3-module core and the light
+ * ring around it and nothing else (so the weights are symmetric about the true centre);
+ * twice, each from the last estimate. The scan's own centres come from run lengths on a
+ * reduced copy, good to about a working pixel; this is good to a small fraction of one.
+ */
+function refineFinderCentre(raster: Raster8, start: Point, module: number): Point {
+  const { data, width, height, channels } = raster;
+  const r = 2.5 * module;
+  let cx = start.x;
+  let cy = start.y;
+  for (let pass = 0; pass < 2; pass++) {
+    const x0 = Math.max(0, Math.floor(cx - r));
+    const x1 = Math.min(width - 1, Math.ceil(cx + r));
+    const y0 = Math.max(0, Math.floor(cy - r));
+    const y1 = Math.min(height - 1, Math.ceil(cy + r));
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let y = y0; y <= y1; y++) {
+      for (let x = x0, i = (y * width + x0) * channels; x <= x1; x++, i += channels) {
+        const dx = x + 0.5 - cx;
+        const dy = y + 0.5 - cy;
+        if (dx * dx + dy * dy > r * r) continue;
+        const g = data[i] + 2 * data[i + 1] + data[i + 2];
+        if (g < lo) lo = g;
+        if (g > hi) hi = g;
+      }
+    }
+    const limit = (lo + hi) / 2;
+    let sw = 0;
+    let sx = 0;
+    let sy = 0;
+    for (let y = y0; y <= y1; y++) {
+      for (let x = x0, i = (y * width + x0) * channels; x <= x1; x++, i += channels) {
+        const dx = x + 0.5 - cx;
+        const dy = y + 0.5 - cy;
+        if (dx * dx + dy * dy > r * r) continue;
+        const w = limit - (data[i] + 2 * data[i + 1] + data[i + 2]);
+        if (w <= 0) continue;
+        sw += w;
+        sx += w * (x + 0.5);
+        sy += w * (y + 0.5);
+      }
+    }
+    if (!(sw > 0) || hi - lo < 40) return { x: cx, y: cy };
+    cx = sx / sw;
+    cy = sy / sw;
+  }
+  return { x: cx, y: cy };
+}
+
+/** A scanned group of three finders as one oriented QR symbol: finder centres (top-left,
+ * top-right, bottom-left, in working pixels) and the symbol's centre. */
+type OrientedSymbol = { finders: Point[]; centre: Point; module: number };
+
+/**
+ * Orients a group of three finders: the top-left one faces the longest side, and top-right
+ * follows it clockwise (a photo is never mirrored, so the symbol's handedness holds). Legs
+ * much unequal, or not about 18 modules long, are not a version 2 symbol.
+ */
+function orientSymbol(c: QrCandidate): OrientedSymbol | undefined {
+  if (c.finders.length !== 3) return undefined;
+  const p = c.finders.map((f) => ({ x: (f.x + 0.5) * c.scale, y: (f.y + 0.5) * c.scale }));
+  const d = (a: Point, b: Point): number => Math.hypot(a.x - b.x, a.y - b.y);
+  const opposite = [d(p[1], p[2]), d(p[0], p[2]), d(p[0], p[1])];
+  const i = opposite.indexOf(Math.max(...opposite));
+  const tl = p[i];
+  const [a, b] = p.filter((_, k) => k !== i);
+  const cross = (a.x - tl.x) * (b.y - tl.y) - (a.y - tl.y) * (b.x - tl.x);
+  const [tr, bl] = cross > 0 ? [a, b] : [b, a];
+  const legs = [d(tl, tr), d(tl, bl)];
+  const leg = (legs[0] + legs[1]) / 2 / c.module;
+  if (Math.max(...legs) > 2 * Math.min(...legs) || leg < 10 || leg > 30) return undefined;
+  return {
+    finders: [tl, tr, bl],
+    centre: { x: (tr.x + bl.x) / 2, y: (tr.y + bl.y) / 2 },
+    module: c.module,
+  };
+}
+
+/**
+ * The scanned symbol at a marker's predicted place: the nearest oriented group whose centre
+ * is nearer this marker's predicted centre than any other marker's and within half the
+ * distance to the nearest other marker (a fit to one marker extrapolates poorly to the far
+ * corners; the markers are far apart, so this still tells them apart), whose top-left to
+ * top-right leg points within 45° of the predicted one (all markers are printed upright on
+ * the card) and whose module size is within a factor of 2 of the predicted one. Its finders
+ * are refined at working resolution. The payload is not read: the first marker's says which
+ * card this is, and the card's geometry says which corner each other symbol is.
+ */
+function symbolAt(
+  raster: Raster8,
+  symbols: OrientedSymbol[],
+  h: Homography,
+  layout: CardLayout,
+  marker: CardMarker,
+): Point[] | undefined {
+  const centreOf = (k: CardMarker): Point => applyHomography(h, k.x + k.w / 2, k.y + k.h / 2);
+  const m = marker.w / marker.modules;
+  const [tl, tr] = finderModules.map(([u, v]) =>
+    applyHomography(h, marker.x + u * m, marker.y + v * m),
+  );
+  const centre = centreOf(marker);
+  const others = layout.markers.filter((k) => k.corner !== marker.corner).map(centreOf);
+  const dist = (a: Point, b: Point): number => Math.hypot(a.x - b.x, a.y - b.y);
+  const spacing = Math.min(...others.map((o) => dist(o, centre)));
+  const leg = { x: tr.x - tl.x, y: tr.y - tl.y };
+  const legLength = Math.hypot(leg.x, leg.y);
+  let best: OrientedSymbol | undefined;
+  let bestDistance = 0.5 * spacing;
+  for (const s of symbols) {
+    const distance = dist(s.centre, centre);
+    if (distance >= bestDistance || others.some((o) => dist(s.centre, o) < distance)) continue;
+    const [stl, str] = s.finders;
+    const sx = str.x - stl.x;
+    const sy = str.y - stl.y;
+    const length = Math.hypot(sx, sy);
+    const cos = (sx * leg.x + sy * leg.y) / (length * legLength);
+    if (!(cos > Math.SQRT1_2) || length > 2 * legLength || length < 0.5 * legLength) continue;
+    best = s;
+    bestDistance = distance;
+  }
+  if (!best) return undefined;
+  const module = best.module;
+  return best.finders.map((f) => refineFinderCentre(raster, f, module));
+}
 
 /**
  * Finds the reference card: finds QR finder patterns by their run ratio on a grey copy and
@@ -245,7 +392,12 @@ export function findCard(raster: Raster8): CardDetection | undefined {
   const { payload } = first;
   let layout: CardLayout;
   try {
-    layout = buildCardLayout({ kind: payload.kind, steps: payload.steps, id: payload.id });
+    layout = buildCardLayout({
+      kind: payload.kind,
+      steps: payload.steps,
+      id: payload.id,
+      version: payload.version,
+    });
   } catch {
     return undefined;
   }
@@ -265,10 +417,24 @@ export function findCard(raster: Raster8): CardDetection | undefined {
   if (!fit) return undefined;
   const start = payload.corner;
   const order = [start, (start + 1) % 4, (start + 3) % 4, (start + 2) % 4];
+  const symbols = found.groups.map(orientSymbol).filter((s) => s !== undefined);
   for (const corner of order) {
+    const marker = layout.markers[corner];
+    // The symbol the scan saw there, if any: its three finder centres, refined, are the
+    // marker's points (jsQR is not run again).
+    const image = symbolAt(raster, symbols, fit.h, layout, marker);
+    if (image) {
+      hits.set(corner, {
+        payload: { ...payload, corner: corner as CardPayload['corner'] },
+        card: toCard(marker, finderModules),
+        image,
+        weights: [1, 1, 1],
+      });
+      fit = fitAll([...hits.values()]) ?? fit;
+      continue;
+    }
     // A first marker read at working resolution is not read again.
     if (corner === start && found.precise) continue;
-    const marker = layout.markers[corner];
     const box = predictedBox(fit.h, marker, 6);
     const x0 = Math.max(0, Math.floor(box.x0));
     const y0 = Math.max(0, Math.floor(box.y0));

@@ -72,43 +72,50 @@ export function readWindow(
   let sr = 0;
   let sg = 0;
   let sb = 0;
-  const kept: number[] = [];
+  const kept = new Int32Array(n);
+  let count = 0;
   for (let k = 0; k < n; k++) {
     if (Y[k] < low || Y[k] > high) continue;
-    kept.push(k);
+    kept[count++] = k;
     sr += rgb[3 * k];
     sg += rgb[3 * k + 1];
     sb += rgb[3 * k + 2];
   }
-  const lab = labOf(sr / kept.length, sg / kept.length, sb / kept.length);
-  const labs = new Float64Array(kept.length * 3);
-  const means = new Float64Array(kept.length * 3);
+  const lab = labOf(sr / count, sg / count, sb / count);
+  // Flat typed arrays filled in place: no array per pixel.
+  const labs = new Float64Array(count * 3);
+  const means = new Float64Array(count * 3);
   let qL = 0;
   let qa = 0;
   let qb = 0;
-  kept.forEach((k, i) => {
+  for (let i = 0; i < count; i++) {
+    const k = kept[i];
     const p = labOf(
       Math.max(0, rgb[3 * k]),
       Math.max(0, rgb[3 * k + 1]),
       Math.max(0, rgb[3 * k + 2]),
     );
-    labs.set([p.L, p.a, p.b], 3 * i);
-    means.set([lab.L, lab.a, lab.b], 3 * i);
+    labs[3 * i] = p.L;
+    labs[3 * i + 1] = p.a;
+    labs[3 * i + 2] = p.b;
+    means[3 * i] = lab.L;
+    means[3 * i + 1] = lab.a;
+    means[3 * i + 2] = lab.b;
     qL += (p.L - lab.L) ** 2;
     qa += (p.a - lab.a) ** 2;
     qb += (p.b - lab.b) ** 2;
-  });
-  const dE = deltaE2000Batch(means, labs, new Float64Array(kept.length));
+  }
+  const dE = deltaE2000Batch(means, labs, new Float64Array(count));
   const reading: WindowReading = {
     window,
     lab: round(lab),
     spread: {
-      L: fixed(Math.sqrt(qL / kept.length)),
-      a: fixed(Math.sqrt(qa / kept.length)),
-      b: fixed(Math.sqrt(qb / kept.length)),
+      L: fixed(Math.sqrt(qL / count)),
+      a: fixed(Math.sqrt(qa / count)),
+      b: fixed(Math.sqrt(qb / count)),
       deltaE90: fixed(quantile(dE, 0.9)),
     },
-    pixels: kept.length,
+    pixels: count,
   };
   const horizontal = samples.nx >= 2 * samples.ny;
   if (horizontal || samples.ny >= 2 * samples.nx) {

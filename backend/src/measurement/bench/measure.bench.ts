@@ -7,7 +7,7 @@
  */
 import { execFile } from 'node:child_process';
 import { mkdtemp, readFile, writeFile } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
+import { availableParallelism, loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { buildCardLayout } from '../../cards/card-layout';
@@ -129,6 +129,11 @@ async function processes(label: string, width: number, height: number, runs: num
   const t = performance.now();
   const pair = await Promise.all([runChild(file, runs), runChild(file, runs)]);
   const pairMs = performance.now() - t;
+  // Two processes can only double the throughput on two idle cores: the load average (1, 5
+  // and 15 min) is printed beside the figure so that a run on busy cores is read as such.
+  const load = loadavg()
+    .map((v) => v.toFixed(1))
+    .join(' / ');
   const perSecond = (photos: number, ms: number): number => (1000 * photos) / ms;
   const alone = perSecond(runs, single.ms);
   const together = perSecond(2 * runs, pairMs);
@@ -136,7 +141,7 @@ async function processes(label: string, width: number, height: number, runs: num
     `${label}: peak RSS of a process measuring one photo ${one.maxRssMb.toFixed(0)} MB ` +
       `(${(one.maxRssMb - empty.maxRssMb).toFixed(0)} MB above the same process measuring none, ${empty.maxRssMb.toFixed(0)} MB); ` +
       `throughput one process ${alone.toFixed(2)} photos/s, two processes at once ${together.toFixed(2)} photos/s ` +
-      `(${(together / alone).toFixed(2)}×; ${runs} photos each, start-up included)${[one, single, ...pair].every((r) => r.ok) ? '' : ' WITH ERRORS'}`,
+      `(${(together / alone).toFixed(2)}×; ${runs} photos each, start-up included; load average ${load} on ${availableParallelism()} cores)${[one, single, ...pair].every((r) => r.ok) ? '' : ' WITH ERRORS'}`,
   );
 }
 
@@ -146,7 +151,11 @@ async function main(): Promise<void> {
   await bench('12 MP', 4032, 3024, 7);
   await bench('48 MP', 8064, 6048, 3);
   console.log(
-    `peak RSS of the bench process ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (started at ${(before / 1048576).toFixed(0)} MB; includes making the test photos); one libvips thread`,
+    `load average ${loadavg()
+      .map((v) => v.toFixed(1))
+      .join(
+        ' / ',
+      )}; peak RSS of the bench process ${(process.resourceUsage().maxRSS / 1024).toFixed(0)} MB (started at ${(before / 1048576).toFixed(0)} MB; includes making the test photos); one libvips thread`,
   );
   await processes('12 MP', 4032, 3024, 6);
   await processes('48 MP', 8064, 6048, 3);
