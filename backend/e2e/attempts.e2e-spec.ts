@@ -3,7 +3,10 @@ import type { INestApplication } from '@nestjs/common';
 import { deltaE2000, type Lab } from '@mixmark/common';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
+import exifr from 'exifr';
+import sharp from 'sharp';
 import { renderScene } from '../src/measurement/testing/photo-scene';
+import { gpsExif, privateStrings, xmpPacket } from '../src/storage/testing/metadata-fixtures';
 import { createTestApp } from './create-test-app';
 import { latestMailTo, registerAccount, type TestAccount } from './helpers';
 
@@ -125,6 +128,29 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
     expect(csv.text.split('\r\n')[1]).toMatch(/,60,failed$/);
     await request(http).get(`/api/classes/${classId}/gradebook`).set(otherTeacher.auth).expect(404);
   });
+
+  it('should grade a PNG sent with GPS in it, keep it as a PNG and serve it without the location', async () => {
+    // The same scene as a PNG carrying camera EXIF, GPS and XMP, as a phone might share it.
+    const png = await sharp(photo).withExif(gpsExif).withXmp(xmpPacket).png().toBuffer();
+    expect(await exifr.gps(png)).toMatchObject({ latitude: expect.any(Number) });
+    const created = await request(http)
+      .post('/api/attempts')
+      .set(student.auth)
+      .field('assignmentId', assignmentId)
+      .attach('photo', png, { filename: 'swatch.png', contentType: 'image/png' })
+      .expect(202);
+    const graded = await waitForGrading(http, student.auth, created.body.id);
+    expect(graded.state).toBe('graded');
+    expect(deltaE2000(target, graded.readings[0].lab)).toBeLessThan(2);
+    const stored = await request(http).get(`/api/attempts/${created.body.id}/photo`).set(student.auth).buffer(true).expect(200);
+    expect(stored.headers['content-type']).toBe('image/png');
+    const bytes = Buffer.from(stored.body);
+    expect(await exifr.gps(bytes).catch(() => undefined)).toBeUndefined();
+    for (const text of privateStrings) expect(bytes.includes(text)).toBe(false);
+    // Lossless: the stored PNG decodes to the very pixels that were sent.
+    const [sent, kept] = await Promise.all([png, bytes].map((b) => sharp(b).raw().toBuffer()));
+    expect(kept.equals(sent)).toBe(true);
+  }, 120_000);
 
   it('should ask for a retake, with the quality code, when the card is not in the photo', async () => {
     const { jpeg } = await renderScene({
