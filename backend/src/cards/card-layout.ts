@@ -5,8 +5,12 @@ import { resolveSteps } from './card-kinds';
 import type { CardKind, CardLayout, CardPatch, MmRect } from './card-layout.types';
 import { encodeCardPayload } from './card-payload';
 
-/** The layout version this generator draws; the markers carry it. */
-export const cardLayoutVersion = 1;
+/** The layout version this generator draws by default; the markers carry it. */
+export const cardLayoutVersion = 2;
+
+/** Every layout version that can still be measured (cards already printed keep working). */
+export const cardLayoutVersions = [1, 2] as const;
+export type CardLayoutVersion = (typeof cardLayoutVersions)[number];
 
 /** Card size (mm): fits A4 and US Letter with margins to spare. */
 const cardWidth = 190;
@@ -17,12 +21,46 @@ const markerInset = 6;
 /** QR version 2 has 25 modules and an alignment pattern, which jsQR uses for the 4th point. */
 const markerModules = 25;
 
+const grey18 = lightnessFromY(0.18);
+
 /**
- * The tone ramp: paper white, then greys evenly spaced in L* down to near black, with the
- * nominal 18 % grey (L* 49.5) in the middle. Nine points are enough for a monotone curve per
- * channel; L* 20 is about as dark as a matte print reliably gets.
+ * Version 1's tone ramp: paper white, then greys evenly spaced in L* down to near black, with
+ * the nominal 18 % grey (L* 49.5) in the middle; L* 20 is about as dark as a matte print
+ * reliably gets. Its three mid-greys are all printed at the nominal 18 %.
  */
-const rampLightness = [100, 90, 80, 70, 60, lightnessFromY(0.18), 40, 30, 20];
+const rampLightnessV1 = [100, 90, 80, 70, 60, grey18, 40, 30, 20];
+const greyLightnessV1 = [grey18, grey18, grey18];
+
+/**
+ * Version 2's tone ramp: eighteen steps, every 5 L* from paper to L* 55, the nominal 18 %
+ * grey, then every 5 L* to 30 and closer steps to L* 20, where flare bends the camera's curve
+ * most. A photo's JPEG rounds each flat patch to about one value per 8 × 8 block (16 × 16
+ * for chroma), an error noise does not average out; twice the steps let a smoothing fit
+ * average those errors instead of passing through each one.
+ */
+const rampLightnessV2 = [
+  100,
+  95,
+  90,
+  85,
+  80,
+  75,
+  70,
+  65,
+  60,
+  55,
+  grey18,
+  45,
+  40,
+  35,
+  30,
+  26,
+  23,
+  20,
+];
+/** Version 2's mid-greys: near 18 % but each at its own 8-bit level (about 5 codes apart,
+ * none the ramp's), so the JPEG's rounding of each is its own and the fit averages them. */
+const greyLightnessV2 = [47.5, 51.5, 53.5];
 
 /** Where the windows go: the middle band between the ramp and the printed notes. */
 const windowArea: MmRect = { x: 38, y: 36, w: 114, h: 56 };
@@ -32,6 +70,26 @@ const windowArea: MmRect = { x: 38, y: 36, w: 114, h: 56 };
 function neutralPatch(name: string, role: CardPatch['role'], rect: MmRect, L: number): CardPatch {
   const Y = L >= 100 ? 1 : srgbChannelToLinear(greyLevel8(yFromLightness(L)) / 255);
   return { name, role, ...rect, lab: { L: lightnessFromY(Y), a: 0, b: 0 }, Y };
+}
+
+/** Version 1's ramp: one row of nine 12 × 22 mm patches along the top, paper first. */
+function rampV1(): CardPatch[] {
+  return rampLightnessV1.map((L, i) =>
+    neutralPatch(`ramp-${i}`, 'ramp', { x: 38 + i * 12.75, y: 8, w: 12, h: 22 }, L),
+  );
+}
+
+/** Version 2's ramp: the same band in two rows of 12 × 10.5 mm patches, the steps zigzag
+ * (even steps on top, odd below) so lightness still falls from left to right. */
+function rampV2(): CardPatch[] {
+  return rampLightnessV2.map((L, i) =>
+    neutralPatch(
+      `ramp-${i}`,
+      'ramp',
+      { x: 38 + (i >> 1) * 12.75, y: i % 2 ? 19.5 : 8, w: 12, h: 10.5 },
+      L,
+    ),
+  );
 }
 
 /** A row of `count` squares of side `size` and gap `gap`, centred in the window area at `y`. */
@@ -79,15 +137,18 @@ function windowLabels(kind: CardKind, windows: MmRect[]): CardLayout['texts'] {
 }
 
 /**
- * The data of a reference card, layout version 1, in millimetres (190 × 130 mm): four QR
- * corner markers, a nine-step neutral ramp along the top, mid-grey patches left, right and
- * below the windows (to see uneven light), the windows for the drill kind, a 50 mm scale bar
- * and short printed instructions. The generator draws from this and the measurement reads
- * from it; nothing on the card is placed anywhere else.
+ * The data of a reference card in millimetres (190 × 130 mm): four QR corner markers, a
+ * neutral ramp along the top, mid-grey patches left, right and below the windows (to see
+ * uneven light), the windows for the drill kind, a 50 mm scale bar and short printed
+ * instructions. The generator draws from this and the measurement reads from it; nothing on
+ * the card is placed anywhere else. Version 2 (the default) has an 18-step ramp in two rows
+ * and mid-greys at three slightly different levels; version 1 (nine steps in one row, the
+ * mid-greys all at 18 %) is kept so cards already printed still measure.
  *
- * @param options - kind, steps (value-ladder: 2 to 9) and either an id or a seed for one
+ * @param options - kind, steps (value-ladder: 2 to 9), either an id or a seed for one, and
+ *   the layout version (default the current one)
  * @returns the layout
- * @throws Error for a bad step count or id
+ * @throws Error for a bad step count, id or version
  * @example
  * buildCardLayout({ kind: 'value-ladder', steps: 5 }).windows.length; // 5
  */
@@ -95,8 +156,15 @@ export function buildCardLayout(options: {
   kind: CardKind;
   steps?: number;
   id?: string;
+  version?: number;
 }): CardLayout {
   const { kind } = options;
+  const version = options.version ?? cardLayoutVersion;
+  if (!cardLayoutVersions.includes(version as CardLayoutVersion)) {
+    throw new Error(
+      `Expected one of ${cardLayoutVersions.join(', ')} for version but received ${version}`,
+    );
+  }
   const steps = resolveSteps(kind, options.steps);
   const id = options.id ?? cardIdFor(`${kind}/${steps}`);
   if (!isCardId(id)) {
@@ -118,34 +186,25 @@ export function buildCardLayout(options: {
     corner: corner as 0 | 1 | 2 | 3,
     modules: markerModules,
     payload: encodeCardPayload({
-      version: cardLayoutVersion,
+      version,
       corner: corner as 0,
       kind,
       steps,
       id,
     }),
   }));
-  const rampWidth = 12;
-  const rampGap = 0.75;
-  const ramp = rampLightness.map((L, i) =>
-    neutralPatch(
-      `ramp-${i}`,
-      'ramp',
-      { x: 38 + i * (rampWidth + rampGap), y: 8, w: rampWidth, h: 22 },
-      L,
-    ),
-  );
-  const grey = lightnessFromY(0.18);
+  const ramp = version === 1 ? rampV1() : rampV2();
+  const [left, right, bottom] = version === 1 ? greyLightnessV1 : greyLightnessV2;
   const greys = [
-    neutralPatch('grey-left', 'grey', { x: 9, y: 38, w: 18, h: 54 }, grey),
-    neutralPatch('grey-right', 'grey', { x: 163, y: 38, w: 18, h: 54 }, grey),
-    neutralPatch('grey-bottom', 'grey', { x: 38, y: 100, w: 18, h: 24 }, grey),
+    neutralPatch('grey-left', 'grey', { x: 9, y: 38, w: 18, h: 54 }, left),
+    neutralPatch('grey-right', 'grey', { x: 163, y: 38, w: 18, h: 54 }, right),
+    neutralPatch('grey-bottom', 'grey', { x: 38, y: 100, w: 18, h: 24 }, bottom),
   ];
   const windows = windowsFor(kind, steps);
   const labels = windowLabels(kind, windows);
   const kindName = steps > 1 && kind === 'value-ladder' ? `${kind}, ${steps} steps` : kind;
   return {
-    version: cardLayoutVersion,
+    version,
     id,
     kind,
     steps,
@@ -160,7 +219,7 @@ export function buildCardLayout(options: {
         x: 60,
         y: 102.5,
         size: 3,
-        text: `Mixmark card · ${kindName} · ${id} · v${cardLayoutVersion}`,
+        text: `Mixmark card · ${kindName} · ${id} · v${version}`,
       },
       {
         x: 60,

@@ -9,7 +9,7 @@ export type MmRect = { x: number; y: number; w: number; h: number };
 
 /** A printed neutral patch: its place and its nominal colour (paper white is L* 100). */
 export type CardPatch = MmRect & {
-  /** Stable name, e.g. `ramp-0` (paper) … `ramp-8`, `grey-left`. */
+  /** Stable name, e.g. `ramp-0` (paper) … `ramp-17` (v2; `ramp-8` in v1), `grey-left`. */
   name: string;
   /** What the patch is for: the tone ramp, or the mid-greys that check evenness of light. */
   role: 'ramp' | 'grey';

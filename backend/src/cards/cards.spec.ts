@@ -18,9 +18,12 @@ describe('buildCardLayout', () => {
   const layouts = [
     ...cardKinds.filter((k) => k !== 'value-ladder').map((kind) => buildCardLayout({ kind })),
     ...[2, 3, 4, 5, 6, 7, 8, 9].map((steps) => buildCardLayout({ kind: 'value-ladder', steps })),
+    // Version 1, as cards printed before v2 carry it.
+    buildCardLayout({ kind: 'match', version: 1 }),
+    buildCardLayout({ kind: 'value-ladder', steps: 9, version: 1 }),
   ];
 
-  it.each(layouts.map((l) => [`${l.kind}/${l.steps}`, l] as const))(
+  it.each(layouts.map((l) => [`${l.kind}/${l.steps} v${l.version}`, l] as const))(
     '%s: windows fit and keep clear',
     (_, layout) => {
       expect(layout.windows).toHaveLength(layout.steps);
@@ -33,6 +36,16 @@ describe('buildCardLayout', () => {
         for (const m of layout.markers) expect(overlaps(w, m, (4 * m.w) / m.modules)).toBe(false);
         for (const p of layout.patches) expect(overlaps(w, p, 2)).toBe(false);
       }
+      for (const p of layout.patches) {
+        for (const m of layout.markers) expect(overlaps(p, m, (4 * m.w) / m.modules)).toBe(false);
+        // Big enough to sample 8 mm clear of its edges.
+        expect(Math.min(p.w, p.h)).toBeGreaterThanOrEqual(10.5);
+      }
+      for (let i = 0; i < layout.patches.length; i++) {
+        for (let j = i + 1; j < layout.patches.length; j++) {
+          expect(overlaps(layout.patches[i], layout.patches[j])).toBe(false);
+        }
+      }
       for (let i = 0; i < layout.windows.length; i++) {
         for (let j = i + 1; j < layout.windows.length; j++) {
           expect(overlaps(layout.windows[i], layout.windows[j], 3)).toBe(false);
@@ -41,17 +54,32 @@ describe('buildCardLayout', () => {
     },
   );
 
-  it('has a ramp from paper to near black with the nominal 18 % grey, and mid-greys on opposite sides', () => {
-    const layout = buildCardLayout({ kind: 'match' });
-    const ramp = layout.patches.filter((p) => p.role === 'ramp');
-    expect(ramp[0].Y).toBe(1);
-    // The nominal 18 % grey, as the nearest 8-bit sRGB level (118) carries it.
-    expect(ramp.some((p) => Math.abs(p.Y - 0.18) < 0.002)).toBe(true);
-    expect(ramp.at(-1)!.lab.L).toBeLessThanOrEqual(20);
-    for (let i = 1; i < ramp.length; i++) expect(ramp[i].Y).toBeLessThan(ramp[i - 1].Y);
-    const greys = layout.patches.filter((p) => p.role === 'grey');
-    const w = layout.windows[0];
-    expect(greys.some((g) => g.x + g.w < w.x) && greys.some((g) => g.x > w.x + w.w)).toBe(true);
+  it.each([1, 2])(
+    'v%i has a ramp from paper to near black with the nominal 18 % grey, and mid-greys on opposite sides',
+    (version) => {
+      const layout = buildCardLayout({ kind: 'match', version });
+      const ramp = layout.patches.filter((p) => p.role === 'ramp');
+      expect(ramp[0].Y).toBe(1);
+      // The nominal 18 % grey, as the nearest 8-bit sRGB level (118) carries it.
+      expect(ramp.some((p) => Math.abs(p.Y - 0.18) < 0.002)).toBe(true);
+      expect(ramp.at(-1)!.lab.L).toBeLessThanOrEqual(20);
+      for (let i = 1; i < ramp.length; i++) expect(ramp[i].Y).toBeLessThan(ramp[i - 1].Y);
+      const greys = layout.patches.filter((p) => p.role === 'grey');
+      const w = layout.windows[0];
+      expect(greys.some((g) => g.x + g.w < w.x) && greys.some((g) => g.x > w.x + w.w)).toBe(true);
+      expect(ramp).toHaveLength(version === 1 ? 9 : 18);
+      expect(layout.markers[0].payload.startsWith(`MXM${version}/`)).toBe(true);
+      // v1 prints its mid-greys all at 18 %; v2 each at its own 8-bit level, none the ramp's.
+      const levels = new Set(greys.map((g) => g.Y));
+      expect(levels.size).toBe(version === 1 ? 1 : 3);
+      if (version === 2) for (const g of greys) expect(ramp.some((p) => p.Y === g.Y)).toBe(false);
+    },
+  );
+
+  it('rejects a layout version it does not know', () => {
+    expect(() => buildCardLayout({ kind: 'match', version: 3 })).toThrow(
+      'Expected one of 1, 2 for version but received 3',
+    );
   });
 
   it('rejects step counts the way sharp words parameter errors', () => {
@@ -81,7 +109,8 @@ describe('renderCardPng', () => {
     expect(data[((px.windows[0].y - 3) * info.width + px.windows[0].x) * 4 + 3]).toBe(255);
     const grey = px.patches.find((p) => p.name === 'grey-left')!;
     const centre = ((grey.y + (grey.h >> 1)) * info.width + grey.x + (grey.w >> 1)) * 4;
-    expect(data[centre]).toBe(118); // sRGB encoding of Y = 0.18 (IEC 61966-2-1): 117.6
+    // Layout v2 prints grey-left at L* 47.5: Y 0.1641, 8-bit sRGB 113 (IEC 61966-2-1).
+    expect(data[centre]).toBe(113);
     const m = layout.markers[2];
     const s = 150 / 25.4;
     const pad = 6 * s;
@@ -98,7 +127,7 @@ describe('renderCardPng', () => {
       .toBuffer({ resolveWithObject: true });
     const code = jsQR(new Uint8ClampedArray(crop.data), crop.info.width, crop.info.height);
     expect(decodeCardPayload(code!.data)).toEqual({
-      version: 1,
+      version: 2,
       corner: 2,
       kind: 'temperature-pair',
       steps: 2,

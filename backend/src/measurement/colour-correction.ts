@@ -65,6 +65,8 @@ export function fitColourCorrection(patches: PatchObservation[]): ColourCorrecti
   const ramp = patches.filter((p) => p.role === 'ramp');
   const mid = ramp.reduce((best, p) => (Math.abs(p.Y - 0.18) < Math.abs(best.Y - 0.18) ? p : best));
   const greys = [mid, ...patches.filter((p) => p.role === 'grey')];
+  // Mid-greys printed at levels of their own (layout v2) are points of the tone curve too.
+  const toneRamp = [...ramp, ...greys.filter((g) => !ramp.some((p) => Math.abs(p.Y - g.Y) < 1e-6))];
   let light: [LightPlane, LightPlane, LightPlane] = [
     [1, 0, 0],
     [1, 0, 0],
@@ -74,8 +76,8 @@ export function fitColourCorrection(patches: PatchObservation[]): ColourCorrecti
   for (let iteration = 0; iteration < 3; iteration++) {
     curves = [0, 1, 2].map((c) =>
       fitToneCurve(
-        ramp.map((p) => p.linear[c]),
-        ramp.map((p) => p.Y * planeAt(light[c], p.x, p.y)),
+        toneRamp.map((p) => p.linear[c]),
+        toneRamp.map((p) => p.Y * planeAt(light[c], p.x, p.y)),
       ),
     );
     light = [0, 1, 2].map((c) => {

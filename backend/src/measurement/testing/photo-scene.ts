@@ -30,6 +30,8 @@ export const casts = {
 export type SceneOptions = {
   kind: CardKind;
   steps?: number;
+  /** Card layout version (default the current one; 1 for cards printed before v2). */
+  version?: number;
   /** True colour under each window (CIELAB D65, in sRGB gamut). */
   swatches: Lab[];
   width: number;
@@ -65,11 +67,16 @@ const cardCache = new Map<
   Promise<{ data: Buffer; width: number; height: number; dpi: number }>
 >();
 
-function cardRaster(kind: CardKind, steps: number | undefined, dpi: number) {
-  const key = `${kind}/${steps}/${dpi}`;
+function cardRaster(
+  kind: CardKind,
+  steps: number | undefined,
+  version: number | undefined,
+  dpi: number,
+) {
+  const key = `${kind}/${steps}/v${version}/${dpi}`;
   let hit = cardCache.get(key);
   if (!hit) {
-    hit = renderCardPng(buildCardLayout({ kind, steps }), dpi).then(async ({ png }) => {
+    hit = renderCardPng(buildCardLayout({ kind, steps, version }), dpi).then(async ({ png }) => {
       const { data, info } = await sharp(png).raw().toBuffer({ resolveWithObject: true });
       return { data, width: info.width, height: info.height, dpi };
     });
@@ -179,10 +186,10 @@ function toneCurve(x: number): number {
 export async function renderScene(
   o: SceneOptions,
 ): Promise<{ jpeg: Buffer; truth: Lab[]; corners: Point[] }> {
-  const layout = buildCardLayout({ kind: o.kind, steps: o.steps });
+  const layout = buildCardLayout({ kind: o.kind, steps: o.steps, version: o.version });
   const ppm = sqrt((o.cardFraction * o.width * o.height) / (layout.width * layout.height));
   const dpi = min(600, max(60, Math.ceil(ppm * 25.4 * 1.2)));
-  const card = await cardRaster(o.kind, o.steps, dpi);
+  const card = await cardRaster(o.kind, o.steps, o.version, dpi);
   const cs = card.dpi / 25.4;
   const { toCard, corners } = posedHomography(o, layout.width, layout.height);
   const random = seededRandom(o.seed);
