@@ -97,4 +97,36 @@ describe('the account page and the teacher’s own swatch in Chromium', () => {
     await page.getByText(/The swatch could not be measured\./).waitFor({ timeout: 30_000 });
     await context.close();
   });
+
+  it('should fill a paint’s swatch in the palette from a photo of it under a card', async () => {
+    const context = await browser.newContext({ viewport: viewports.phone });
+    const page = await context.newPage();
+    const foreign = watchForeignRequests(page, baseUrl);
+    await register(page, 'student', 'Odile Farrant', `odile.${stamp}@example.test`);
+    await page.getByRole('heading', { name: 'Your assignments' }).waitFor();
+    await page.goto(`${baseUrl}/palette`);
+    await page.getByRole('heading', { name: 'My palette' }).waitFor();
+    await page.getByLabel('Name', { exact: true }).fill('Muted sea green');
+    await page.getByRole('button', { name: 'Measure from a photo' }).click();
+
+    const painted = { L: 58, a: -24, b: 6 };
+    const jpeg = renderSyntheticPhoto({
+      kind: 'match', swatches: [painted], width: 1600, height: 1200, cardFraction: 0.5,
+      rotation: -8, tiltX: 2, tiltY: 3, ev: 0, cast: 'neutral', crossTalk: 0.01, flare: 0.01,
+      vignetting: 0.1, noise: 1.5, jpegQuality: 90, seed: 23,
+    });
+    await page.getByLabel('Take or choose the photo').setInputFiles({ name: 'sea-green.jpg', mimeType: 'image/jpeg', buffer: jpeg });
+    await page.getByText('Measured: the reading is in the form. Save the paint to keep it.').waitFor({ timeout: 60_000 });
+    const L = Number(await page.getByLabel('L*', { exact: true }).inputValue());
+    const a = Number(await page.getByLabel('a*', { exact: true }).inputValue());
+    expect(Math.abs(L - painted.L)).toBeLessThan(3);
+    expect(Math.abs(a - painted.a)).toBeLessThan(4);
+    await page.getByRole('img', { name: /This paint's swatch/ }).waitFor();
+    await shootBoth(page, 'palette-measure');
+
+    await page.getByRole('button', { name: 'Add paint' }).click();
+    await page.getByRole('img', { name: /Muted sea green, measured/ }).waitFor();
+    expect(foreign).toEqual([]);
+    await context.close();
+  });
 });

@@ -9,6 +9,8 @@ const codeWords: Record<string, string> = {
   network_error: 'Mixmark cannot reach its server. Check your connection and try again.',
   too_many_requests: 'Too many tries in a short time. Wait a minute, then try again.',
   forbidden: 'Your account cannot do this.',
+  payload_too_large:
+    'This file is too large to send. Take the photo at a lower resolution, or choose a smaller file.',
   internal_error: 'Something went wrong on the server. Please try again in a moment.',
   unexpected_reply: 'The server gave an answer Mixmark did not expect. Please try again.',
 };

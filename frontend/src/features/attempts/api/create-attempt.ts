@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api } from '@/lib/api-client';
+import { reportUpload } from '@/lib/use-upload-mutation';
 import type { Attempt } from '../types';
 
 export type CreateAttemptRequest = { photo: File; assignmentId?: string; drillId?: string };
@@ -16,9 +17,7 @@ export async function createAttempt(
   body.append('photo', photo);
   const { data } = await api.post<Attempt>('/attempts', body, {
     timeout: 120_000,
-    onUploadProgress: (event) => {
-      if (event.total) onProgress?.(event.loaded / event.total);
-    },
+    onUploadProgress: reportUpload(onProgress),
   });
   return data;
 }

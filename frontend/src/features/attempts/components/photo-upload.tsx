@@ -1,11 +1,10 @@
-import PhotoCameraOutlined from '@mui/icons-material/PhotoCameraOutlined';
 import Alert from '@mui/material/Alert';
-import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
-import LinearProgress from '@mui/material/LinearProgress';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { useId, useRef, useState } from 'react';
+import { useState } from 'react';
+import { PhotoPicker } from '@/components/photo/photo-picker';
+import { UploadProgress } from '@/components/photo/upload-progress';
 import { errorMessage } from '@/lib/error-words';
 import { useCreateAttempt } from '../api/create-attempt';
 import type { Attempt } from '../types';
@@ -25,8 +24,6 @@ export function PhotoUpload({
   drillId: string;
   onUploaded: (attempt: Attempt) => void;
 }) {
-  const inputId = useId();
-  const input = useRef<HTMLInputElement>(null);
   const [photo, setPhoto] = useState<File>();
   const upload = useCreateAttempt({ onSuccess: onUploaded });
 
@@ -36,48 +33,23 @@ export function PhotoUpload({
 
   return (
     <Stack spacing={2}>
-      <Box>
-        <input
-          ref={input}
-          id={inputId}
-          type="file"
-          accept="image/*"
-          capture="environment"
-          style={{ position: 'absolute', width: 1, height: 1, opacity: 0 }}
-          onChange={(event) => {
-            upload.reset();
-            setPhoto(event.target.files?.[0]);
-          }}
-        />
-        <Button
-          component="label"
-          htmlFor={inputId}
-          variant={photo ? 'outlined' : 'contained'}
-          size="large"
-          startIcon={<PhotoCameraOutlined />}
-          fullWidth
-          sx={{ maxWidth: { sm: 360 } }}
-        >
-          {photo ? 'Choose another photo' : 'Take or choose a photo'}
-        </Button>
-      </Box>
+      <PhotoPicker
+        label={photo ? 'Choose another photo' : 'Take or choose a photo'}
+        variant={photo ? 'outlined' : 'contained'}
+        size="large"
+        fullWidth
+        sx={{ maxWidth: { sm: 360 } }}
+        onPick={(picked) => {
+          upload.reset();
+          setPhoto(picked);
+        }}
+      />
       {photo && (
         <Typography>
           Ready to send: <strong>{photo.name}</strong> ({megabytes(photo.size)})
         </Typography>
       )}
-      {upload.isPending && (
-        <Stack spacing={0.5}>
-          <LinearProgress
-            variant="determinate"
-            value={Math.round(upload.progress * 100)}
-            aria-label="Upload progress"
-          />
-          <Typography variant="body2" role="status">
-            Sending… {Math.round(upload.progress * 100)} %
-          </Typography>
-        </Stack>
-      )}
+      {upload.isPending && <UploadProgress progress={upload.progress} />}
       {upload.isError && (
         <Alert severity="error" role="alert">
           {errorMessage(upload.error)}

@@ -1,8 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import type { CardPaper } from '@/components/cards/card-paper';
 import { fileNameFrom, saveBlob } from '@/lib/save-blob';
 
-export type CardPaper = 'A4' | 'letter';
+export type { CardPaper };
 
 /** The drill's reference card as a true-size PDF for the paper given. */
 export async function getCardPdf(drillId: string, paper: CardPaper): Promise<{ blob: Blob; fileName: string }> {

@@ -1,7 +1,6 @@
 import type { DrillKind, Lab } from '@mixmark/common';
-import { useMutation } from '@tanstack/react-query';
-import { useState } from 'react';
 import { api } from '@/lib/api-client';
+import { reportUpload, useUploadMutation } from '@/lib/use-upload-mutation';
 
 /** What `POST /api/drills/targets/measure` answers: one reading per window of the card, in window order. */
 export type MeasuredTargets = {
@@ -25,9 +24,7 @@ export async function measureTargets(
   body.append('photo', photo);
   const { data } = await api.post<MeasuredTargets>('/drills/targets/measure', body, {
     timeout: 120_000,
-    onUploadProgress: (event) => {
-      if (event.total) onProgress?.(event.loaded / event.total);
-    },
+    onUploadProgress: reportUpload(onProgress),
   });
   return data;
 }
@@ -35,16 +32,5 @@ export async function measureTargets(
 export function useMeasureTargets({
   onSuccess,
 }: { onSuccess?: (measured: MeasuredTargets) => void } = {}) {
-  const [progress, setProgress] = useState(0);
-  const mutation = useMutation({
-    mutationFn: (photo: File) => {
-      setProgress(0);
-      return measureTargets(photo, setProgress);
-    },
-    onSuccess: (measured) => {
-      setProgress(1);
-      onSuccess?.(measured);
-    },
-  });
-  return { ...mutation, progress };
+  return useUploadMutation(measureTargets, { onSuccess });
 }

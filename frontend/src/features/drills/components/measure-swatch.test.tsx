@@ -1,9 +1,12 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { AxiosHeaders } from 'axios';
 import { http, HttpResponse } from 'msw';
 import { describe, expect, it, vi } from 'vitest';
+import { api } from '@/lib/api-client';
 import { server } from '@/testing/mocks/server';
 import { renderApp, signInAs } from '@/testing/test-utils';
+import type { Drill } from '../types';
 import { DrillEditor } from './drill-editor';
 
 const photo = () => new File([new Uint8Array(4096)], 'my-swatch.jpg', { type: 'image/jpeg' });
@@ -111,5 +114,90 @@ describe('Measure my painted swatch', () => {
     const target = screen.getByRole('group', { name: 'Target 1' });
     expect(within(target).getByLabelText('L*')).toHaveValue(55.2);
     expect(within(target).getByLabelText('b*')).toHaveValue(14);
+  });
+
+  it('should print a card by kind for a drill not saved yet, with the ladder steps from the form', async () => {
+    signInAs('teacher');
+    // jsdom's XHR cannot hand MSW a blob body, so the axios instance's get is stubbed.
+    const get = vi.spyOn(api, 'get').mockImplementation(async (url: string) => ({
+      data: new Blob(['pdf']),
+      status: 200,
+      statusText: 'OK',
+      headers: { 'content-disposition': `attachment; filename="${url.split('/')[2]}-card.pdf"` },
+      config: { headers: new AxiosHeaders() },
+    }));
+    Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:card'), revokeObjectURL: vi.fn() });
+    const saved: string[] = [];
+    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(function (
+      this: HTMLAnchorElement,
+    ) {
+      saved.push(this.download);
+    });
+    renderApp(<DrillEditor onSaved={vi.fn()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Measure my painted swatch' }));
+    expect(screen.queryByText(/save it first/)).not.toBeInTheDocument();
+    await userEvent.click(screen.getByRole('button', { name: 'Download a match card (PDF, A4)' }));
+    await waitFor(() => expect(saved).toEqual(['match-card.pdf']));
+    expect(get).toHaveBeenLastCalledWith('/cards/match/card.pdf', {
+      params: { paper: 'A4' },
+      responseType: 'blob',
+    });
+
+    await userEvent.click(screen.getByRole('combobox', { name: 'Kind' }));
+    await userEvent.click(await screen.findByRole('option', { name: 'Value ladder' }));
+    await userEvent.click(screen.getByRole('button', { name: 'Add a step' }));
+    expect(
+      screen.getByText(
+        /this prints a value ladder card with 6 steps, for the drill as it is set now/,
+      ),
+    ).toBeInTheDocument();
+    await userEvent.click(
+      screen.getByRole('button', { name: 'Download a value ladder card (PDF, US Letter)' }),
+    );
+    await waitFor(() => expect(saved).toEqual(['match-card.pdf', 'value-ladder-card.pdf']));
+    expect(get).toHaveBeenLastCalledWith('/cards/value-ladder/card.pdf', {
+      params: { steps: 6, paper: 'letter' },
+      responseType: 'blob',
+    });
+    click.mockRestore();
+    get.mockRestore();
+  });
+
+  it("should offer a saved drill's own card", async () => {
+    signInAs('teacher');
+    const get = vi.spyOn(api, 'get').mockImplementation(async () => ({
+      data: new Blob(['pdf']),
+      status: 200,
+      statusText: 'OK',
+      headers: {},
+      config: { headers: new AxiosHeaders() },
+    }));
+    Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:card'), revokeObjectURL: vi.fn() });
+    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => {});
+    const drill: Drill = {
+      id: 'd1',
+      ownerId: 'u1',
+      title: 'Earth red, by eye',
+      kind: 'match',
+      instructions: 'Mix it from two paints.',
+      targets: [{ lab: { L: 45, a: 28, b: 24 }, enteredAs: 'lab' }],
+      tolerance: { deltaE: 3 },
+      palette: [],
+      visibility: 'private',
+      createdAt: '2025-01-06T09:00:00.000Z',
+      updatedAt: '2025-01-06T09:00:00.000Z',
+    };
+    renderApp(<DrillEditor drill={drill} onSaved={vi.fn()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Measure my painted swatch' }));
+    await userEvent.click(
+      screen.getByRole('button', { name: "Download this drill's card (PDF, A4)" }),
+    );
+    await waitFor(() => expect(click).toHaveBeenCalled());
+    expect(get).toHaveBeenCalledWith('/drills/d1/card.pdf', {
+      params: { paper: 'A4' },
+      responseType: 'blob',
+    });
+    click.mockRestore();
+    get.mockRestore();
   });
 });

@@ -1,47 +1,33 @@
 import { targetCountByKind, type DrillKind, type Lab } from '@mixmark/common';
-import DownloadOutlined from '@mui/icons-material/DownloadOutlined';
 import PhotoCameraOutlined from '@mui/icons-material/PhotoCameraOutlined';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
-import LinearProgress from '@mui/material/LinearProgress';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useId, useState } from 'react';
-import { ErrorAlert } from '@/components/ui/error-alert';
+import { CardPdfButtons, KindCardButtons } from '@/components/cards/card-pdf-buttons';
+import { roundLab } from '@/components/colour/round-lab';
+import { MeasureWarnings } from '@/components/photo/measure-warnings';
+import { PhotoPicker } from '@/components/photo/photo-picker';
+import { UploadProgress } from '@/components/photo/upload-progress';
 import { errorMessage } from '@/lib/error-words';
 import { swatchSurface } from '@/theme/theme';
 import { useDownloadCardPdf } from '../api/download-card-pdf';
 import { useMeasureTargets, type MeasuredTargets } from '../api/measure-targets';
 import { kindWords } from '../types';
-import { defaultPaper } from './reference-card';
 
-/** One decimal, as the Lab fields take it. */
-const roundLab = ({ L, a, b }: Lab): Lab => ({
-  L: +L.toFixed(1),
-  a: +a.toFixed(1),
-  b: +b.toFixed(1),
-});
-
-function CardDownload({ drillId }: { drillId: string }) {
-  const paper = defaultPaper();
+/** The saved drill's own card, in A4 or US Letter. */
+function DrillCardButtons({ drillId }: { drillId: string }) {
   const download = useDownloadCardPdf({ drillId });
   return (
-    <Stack spacing={1} sx={{ alignItems: 'flex-start' }}>
-      <Button
-        variant="outlined"
-        size="small"
-        startIcon={<DownloadOutlined />}
-        onClick={() => download.mutate(paper)}
-        disabled={download.isPending}
-      >
-        {download.isPending
-          ? 'Preparing the PDF…'
-          : `Download this drill's card (PDF, ${paper === 'A4' ? 'A4' : 'US Letter'})`}
-      </Button>
-      {download.isError && <ErrorAlert error={download.error} />}
-    </Stack>
+    <CardPdfButtons
+      what="this drill's card"
+      pending={download.isPending}
+      error={download.isError ? download.error : undefined}
+      onDownload={(paper) => download.mutate(paper)}
+    />
   );
 }
 
@@ -67,7 +53,6 @@ export function MeasureSwatch({
   onUse: (index: number, lab: Lab) => void;
 }) {
   const panelId = useId();
-  const inputId = useId();
   const [open, setOpen] = useState(false);
   const [filled, setFilled] = useState(false);
   const [used, setUsed] = useState<Record<number, number>>({});
@@ -116,12 +101,21 @@ export function MeasureSwatch({
                   window(s).
                 </Typography>
                 {drillId ? (
-                  <CardDownload drillId={drillId} />
+                  <DrillCardButtons drillId={drillId} />
                 ) : (
-                  <Typography variant="body2" color="text.secondary">
-                    A new drill has no card yet: save it first and print its card on the edit page,
-                    or use the card of any drill you have printed (its windows are read in order).
-                  </Typography>
+                  <>
+                    <Typography variant="body2" color="text.secondary">
+                      The drill is not saved yet, so this prints a{' '}
+                      {kindWords[kind].name.toLowerCase()} card
+                      {kind === 'value-ladder' ? ` with ${targetCount} steps` : ''}, for the drill
+                      as it is set now.
+                    </Typography>
+                    <KindCardButtons
+                      kind={kind}
+                      steps={kind === 'value-ladder' ? targetCount : undefined}
+                      what={`a ${kindWords[kind].name.toLowerCase()} card`}
+                    />
+                  </>
                 )}
               </li>
               <li>
@@ -135,46 +129,24 @@ export function MeasureSwatch({
                   <strong>Send the photo.</strong> Each window's reading becomes a target (window 1
                   first).
                 </Typography>
-                <input
-                  id={inputId}
-                  type="file"
-                  accept="image/*"
-                  capture="environment"
-                  style={{ position: 'absolute', width: 1, height: 1, opacity: 0 }}
-                  onChange={(event) => {
-                    const photo = event.target.files?.[0];
-                    event.target.value = '';
+                <PhotoPicker
+                  label={
+                    measured || measure.isError
+                      ? 'Measure another photo'
+                      : 'Take or choose the photo'
+                  }
+                  clearAfterPick
+                  disabled={measure.isPending}
+                  onPick={(photo) => {
                     if (photo) measure.mutate(photo);
                   }}
-                />
-                <Button
-                  component="label"
-                  htmlFor={inputId}
-                  variant="contained"
-                  startIcon={<PhotoCameraOutlined />}
-                  disabled={measure.isPending}
                   sx={{ mt: 1 }}
-                >
-                  {measured || measure.isError
-                    ? 'Measure another photo'
-                    : 'Take or choose the photo'}
-                </Button>
+                />
               </li>
             </Box>
 
             {measure.isPending && (
-              <Stack spacing={0.5}>
-                <LinearProgress
-                  variant={measure.progress < 1 ? 'determinate' : 'indeterminate'}
-                  value={Math.round(measure.progress * 100)}
-                  aria-label="Upload progress"
-                />
-                <Typography variant="body2" role="status">
-                  {measure.progress < 1
-                    ? `Sending… ${Math.round(measure.progress * 100)} %`
-                    : 'Measuring the swatch…'}
-                </Typography>
-              </Stack>
+              <UploadProgress progress={measure.progress} afterSent="Measuring the swatch…" />
             )}
             {measure.isError && (
               <Alert severity="error" role="alert">
@@ -191,18 +163,7 @@ export function MeasureSwatch({
                   {measured.cardKind !== kind &&
                     ` The card in the photo was printed for a ${kindWords[measured.cardKind].name.toLowerCase()} drill.`}
                 </Alert>
-                {measured.warnings.length > 0 && (
-                  <Alert severity="warning">
-                    <Typography variant="body2" sx={{ fontWeight: 700 }}>
-                      Measured, with a caution:
-                    </Typography>
-                    <Box component="ul" sx={{ m: 0, pl: 2.5 }}>
-                      {measured.warnings.map((warning) => (
-                        <li key={`${warning.code}-${warning.message}`}>{warning.message}</li>
-                      ))}
-                    </Box>
-                  </Alert>
-                )}
+                <MeasureWarnings warnings={measured.warnings} />
                 <Box
                   component="ul"
                   aria-label="Readings from your swatch"

@@ -10,15 +10,10 @@ import Skeleton from '@mui/material/Skeleton';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useEffect, useId, useMemo, useState } from 'react';
+import { defaultPaper } from '@/components/cards/card-paper';
 import { ErrorAlert } from '@/components/ui/error-alert';
 import { useDownloadCardPdf, type CardPaper } from '../api/download-card-pdf';
 import { useCardPreview } from '../api/get-card-preview';
-
-/** Letter where it is the usual paper (the Americas' letter countries), A4 elsewhere. */
-export function defaultPaper(): CardPaper {
-  const region = typeof navigator === 'undefined' ? '' : (navigator.language.split('-')[1] ?? '');
-  return ['US', 'CA', 'MX', 'PH', 'CL', 'CO', 'VE'].includes(region.toUpperCase()) ? 'letter' : 'A4';
-}
 
 function CardPreview({ drillId }: { drillId: string }) {
   const preview = useCardPreview({ drillId });

@@ -1,5 +1,5 @@
 import { yupResolver } from '@hookform/resolvers/yup';
-import { paintOpacityValues, paintSchema, paintStainingValues, type PaintInput } from '@mixmark/common';
+import { paintOpacityValues, paintSchema, paintStainingValues, type Lab, type PaintInput } from '@mixmark/common';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Checkbox from '@mui/material/Checkbox';
@@ -9,13 +9,20 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
+import { ColourSwatch } from '@/components/colour/colour-swatch';
 import { PigmentsField } from '@/components/colour/pigments-field';
+import { SwatchStage } from '@/components/ui/swatch-stage';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
 import { useCreatePaint } from '../api/create-paint';
 import { useUpdatePaint } from '../api/update-paint';
 import { opacityWords, stainingWords, type Paint } from '../types';
+import { MeasurePaintSwatch } from './measure-paint-swatch';
 
 const fields = ['name', 'pigments', 'opacity', 'staining', 'granulating', 'swatchLab'] as const;
+
+/** A Lab the fields hold in full (a field being typed in can be empty for a moment). */
+const isWholeLab = (lab: PaintInput['swatchLab']): lab is Lab =>
+  Boolean(lab) && [lab?.L, lab?.a, lab?.b].every((v) => typeof v === 'number' && Number.isFinite(v));
 
 const toInput = (paint?: Paint): PaintInput => ({
   name: paint?.name ?? '',
@@ -149,12 +156,22 @@ export function PaintForm({ paint, onDone }: { paint?: Paint; onDone?: () => voi
         label="I have measured a swatch of it (CIELAB)"
       />
       {swatch && (
-        <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap', gap: 1 }}>
-          {labField('L', 'L*')}
-          {labField('a', 'a*')}
-          {labField('b', 'b*')}
+        <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: { sm: 'flex-start' } }}>
+          <Stack direction="row" sx={{ flexWrap: 'wrap', gap: 1 }}>
+            {labField('L', 'L*')}
+            {labField('a', 'a*')}
+            {labField('b', 'b*')}
+          </Stack>
+          {isWholeLab(swatch) && (
+            <SwatchStage sx={{ p: 1.5, alignSelf: 'flex-start' }}>
+              <ColourSwatch lab={swatch} caption="This paint's swatch" size={64} />
+            </SwatchStage>
+          )}
         </Stack>
       )}
+      <MeasurePaintSwatch
+        onReading={(lab) => form.setValue('swatchLab', lab, { shouldDirty: true, shouldValidate: true })}
+      />
       <Stack direction="row" spacing={1}>
         <Button type="submit" variant="contained" loading={saving}>
           {paint ? 'Save paint' : 'Add paint'}
