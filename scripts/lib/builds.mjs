@@ -40,7 +40,10 @@ export async function buildIfStale(rootDir, names, { log = console.log, force = 
     const built = existsSync(stamp) ? statSync(stamp).mtimeMs : 0;
     if (!force && built > newestMtime(step.inputs)) continue;
     log(`Building ${step.name}...`);
-    await run('npm', ['run', '-s', 'build', '-w', step.name], { cwd: rootDir, capture: true, label: `the ${step.name} build` });
+    // Always a production build: a caller's NODE_ENV (vitest sets `test`) would make Vite bundle
+    // React's development code, which `npm start` would then serve and bench:web would measure.
+    const env = { ...process.env, NODE_ENV: 'production' };
+    await run('npm', ['run', '-s', 'build', '-w', step.name], { cwd: rootDir, env, capture: true, label: `the ${step.name} build` });
     writeFileSync(stamp, new Date().toISOString());
   }
 }
