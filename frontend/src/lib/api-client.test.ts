@@ -2,7 +2,8 @@ import { http, HttpResponse } from 'msw';
 import { describe, expect, it } from 'vitest';
 import { server } from '@/testing/mocks/server';
 import { signInAs } from '@/testing/test-utils';
-import { api, refreshSession } from './api-client';
+import { AxiosError, AxiosHeaders } from 'axios';
+import { api, readBlobReply, refreshSession, toApiError } from './api-client';
 import { authStore, type SessionUser } from './auth-store';
 
 const newSession = {
@@ -81,6 +82,25 @@ describe('api client', () => {
       apiError: { code: 'invalid_credentials' },
     });
     expect(refreshes).toBe(0);
+  });
+
+  it('should read a download\'s error reply (a Blob) back as the API\'s error', async () => {
+    // Built by hand: msw cannot answer an XHR with a Blob under jsdom.
+    const reply = { statusCode: 400, code: 'card_kind_unknown', message: 'There is no "rainbow" card.' };
+    const error = new AxiosError('Request failed with status code 400', 'ERR_BAD_REQUEST', undefined, undefined, {
+      status: 400,
+      statusText: 'Bad Request',
+      headers: {},
+      config: { headers: new AxiosHeaders() },
+      data: new Blob([JSON.stringify(reply)], { type: 'application/json' }),
+    });
+    await readBlobReply(error);
+    expect(toApiError(error)).toEqual(reply);
+    const notJson = new AxiosError('failed', 'ERR_BAD_RESPONSE', undefined, undefined, {
+      status: 502, statusText: 'Bad Gateway', headers: {}, config: { headers: new AxiosHeaders() }, data: new Blob(['<html>'], { type: 'text/html' }),
+    });
+    await readBlobReply(notJson);
+    expect(toApiError(notJson)).toMatchObject({ statusCode: 502, code: 'unexpected_reply' });
   });
 
   it('should report upload progress and put defined params in the query', async () => {

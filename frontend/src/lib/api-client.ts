@@ -48,6 +48,19 @@ export function toApiError(error: unknown): ApiError {
   };
 }
 
+/**
+ * Downloads (card PDFs, CSV) ask for a Blob, so their error reply arrives as one too: read it
+ * back as the API's JSON in place, so the person sees the server's sentence, not just a status.
+ */
+export async function readBlobReply(error: unknown): Promise<void> {
+  if (!(error instanceof AxiosError) || !(error.response?.data instanceof Blob)) return;
+  try {
+    error.response.data = JSON.parse(await error.response.data.text());
+  } catch {
+    // Not JSON: toApiError words the status alone.
+  }
+}
+
 /** Requests to these paths never trigger a refresh: they are how a session starts and ends. */
 const sessionPaths = /^\/?auth\/(sign-in|register|refresh|sign-out|password-reset)/;
 
@@ -118,6 +131,7 @@ api.interceptors.response.use(undefined, async (error: unknown) => {
     const session = await refreshSession();
     if (session) return api.request(config);
   }
+  await readBlobReply(error);
   const apiError = toApiError(error);
   return Promise.reject(Object.assign(new Error(apiError.message), { apiError }));
 });
