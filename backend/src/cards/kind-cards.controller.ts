@@ -25,12 +25,19 @@ export class KindCardsController {
     const size = paper?.toUpperCase() === 'LETTER' ? 'LETTER' : 'A4';
     response
       .type('application/pdf')
-      .setHeader('content-disposition', `attachment; filename="mixmark-card-${request.kind}-${size.toLowerCase()}.pdf"`)
+      .setHeader(
+        'content-disposition',
+        `attachment; filename="mixmark-card-${request.kind}-${size.toLowerCase()}.pdf"`,
+      )
       .send(await this.cardsService.pdf(request, size));
   }
 
   @Get('card.png')
-  async png(@Param('kind') kind: string, @Query('steps') steps: string | undefined, @Res() response: Response): Promise<void> {
+  async png(
+    @Param('kind') kind: string,
+    @Query('steps') steps: string | undefined,
+    @Res() response: Response,
+  ): Promise<void> {
     const { png } = await this.cardsService.png(this.requestFor(kind, steps), 150);
     response.type('image/png').setHeader('cache-control', 'private, max-age=3600').send(png);
   }
@@ -47,11 +54,18 @@ export class KindCardsController {
     const steps = stepsText === undefined || stepsText === '' ? undefined : Number(stepsText);
     try {
       const count = resolveSteps(kind as CardKind, steps);
-      return { kind, steps: kind === 'value-ladder' ? count : undefined, id: cardIdFor(`${kind}/${count}`) };
+      return {
+        kind,
+        steps: kind === 'value-ladder' ? count : undefined,
+        id: cardIdFor(`${kind}/${count}`),
+      };
     } catch {
       throw new BadRequestException({
         code: 'card_steps_invalid',
-        message: kind === 'value-ladder' ? 'A value ladder card has 2 to 9 steps.' : `A ${kind} card has a fixed number of windows; leave steps out.`,
+        message:
+          kind === 'value-ladder'
+            ? 'A value ladder card has 2 to 9 steps.'
+            : `A ${kind} card has a fixed number of windows; leave steps out.`,
         details: { steps: 'invalid' },
       });
     }

@@ -1,7 +1,11 @@
 import { Controller, Post, UploadedFile, UseInterceptors } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { Roles } from '../common/decorators/roles.decorator';
-import { measureSwatchPhoto, swatchPhotoLimits, type MeasuredSwatch } from '../swatches/measure-swatch-photo';
+import {
+  measureSwatchPhoto,
+  swatchPhotoLimits,
+  type MeasuredSwatch,
+} from '../swatches/measure-swatch-photo';
 
 export interface MeasuredTargets {
   /** One reading per window of the card in the photo, in window order. */

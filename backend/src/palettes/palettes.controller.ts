@@ -1,10 +1,25 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, UploadedFile, UseInterceptors } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  HttpCode,
+  Param,
+  Post,
+  Put,
+  UploadedFile,
+  UseInterceptors,
+} from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import { paintSchema, type PaintInput } from '@mixmark/common';
 import { CurrentUser, type AuthUser } from '../common/decorators/current-user.decorator';
 import { parseId } from '../common/pipes/parse-id.pipe';
 import { SchemaValidationPipe } from '../common/pipes/schema-validation.pipe';
-import { measureSwatchPhoto, swatchPhotoLimits, type MeasuredSwatches } from '../swatches/measure-swatch-photo';
+import {
+  measureSwatchPhoto,
+  swatchPhotoLimits,
+  type MeasuredSwatches,
+} from '../swatches/measure-swatch-photo';
 import { PalettesService, type PaintView, type PaletteView } from './palettes.service';
 
 /** The caller's own paints. */
@@ -18,12 +33,19 @@ export class PalettesController {
   }
 
   @Post('paints')
-  create(@CurrentUser() caller: AuthUser, @Body(new SchemaValidationPipe(paintSchema)) body: PaintInput): Promise<PaintView> {
+  create(
+    @CurrentUser() caller: AuthUser,
+    @Body(new SchemaValidationPipe(paintSchema)) body: PaintInput,
+  ): Promise<PaintView> {
     return this.palettesService.create(caller, body);
   }
 
   @Put('paints/:id')
-  update(@CurrentUser() caller: AuthUser, @Param('id', parseId()) id: string, @Body(new SchemaValidationPipe(paintSchema)) body: PaintInput): Promise<PaintView> {
+  update(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', parseId()) id: string,
+    @Body(new SchemaValidationPipe(paintSchema)) body: PaintInput,
+  ): Promise<PaintView> {
     return this.palettesService.update(caller, id, body);
   }
 

@@ -54,7 +54,9 @@ export function photoFileHttpError(code: string, message: string, bytes: Buffer)
  * @throws UnprocessableEntityException with the first quality code, every problem's sentence in
  *   the message (so a person fixes them all in one retake)
  */
-export async function measureSwatchPhoto(file: Express.Multer.File | undefined): Promise<MeasuredSwatches> {
+export async function measureSwatchPhoto(
+  file: Express.Multer.File | undefined,
+): Promise<MeasuredSwatches> {
   if (!file || file.size === 0) {
     throw new BadRequestException({
       code: 'photo_missing',
@@ -64,7 +66,8 @@ export async function measureSwatchPhoto(file: Express.Multer.File | undefined):
   }
   const { result } = await measurePhoto(file.buffer);
   const [first] = result.errors;
-  if (first && fileCodes.has(first.code)) throw photoFileHttpError(first.code, first.message, file.buffer);
+  if (first && fileCodes.has(first.code))
+    throw photoFileHttpError(first.code, first.message, file.buffer);
   if (!result.ok || !result.card) {
     const code = first?.code ?? 'CARD_NOT_FOUND';
     const message = result.errors.length
@@ -77,6 +80,10 @@ export async function measureSwatchPhoto(file: Express.Multer.File | undefined):
     warnings: result.warnings,
     swatches: [...result.readings]
       .sort((x, y) => x.window - y.window)
-      .map((r) => ({ lab: r.lab, hex: labToHex(r.lab), spread: { L: r.spread.L, a: r.spread.a, b: r.spread.b } })),
+      .map((r) => ({
+        lab: r.lab,
+        hex: labToHex(r.lab),
+        spread: { L: r.spread.L, a: r.spread.a, b: r.spread.b },
+      })),
   };
 }

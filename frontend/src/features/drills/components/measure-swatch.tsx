@@ -10,9 +10,7 @@ import { useId, useState } from 'react';
 import { CardPdfButtons, KindCardButtons } from '@/components/cards/card-pdf-buttons';
 import { roundLab } from '@/components/colour/round-lab';
 import { MeasureWarnings } from '@/components/photo/measure-warnings';
-import { PhotoPicker } from '@/components/photo/photo-picker';
-import { UploadProgress } from '@/components/photo/upload-progress';
-import { errorMessage } from '@/lib/error-words';
+import { MeasurePhotoPicker, MeasurePhotoStatus } from '@/components/photo/measure-photo-step';
 import { swatchSurface } from '@/theme/theme';
 import { useDownloadCardPdf } from '../api/download-card-pdf';
 import { useMeasureTargets, type MeasuredTargets } from '../api/measure-targets';
@@ -129,30 +127,11 @@ export function MeasureSwatch({
                   <strong>Send the photo.</strong> Each window's reading becomes a target (window 1
                   first).
                 </Typography>
-                <PhotoPicker
-                  label={
-                    measured || measure.isError
-                      ? 'Measure another photo'
-                      : 'Take or choose the photo'
-                  }
-                  clearAfterPick
-                  disabled={measure.isPending}
-                  onPick={(photo) => {
-                    if (photo) measure.mutate(photo);
-                  }}
-                  sx={{ mt: 1 }}
-                />
+                <MeasurePhotoPicker measure={measure} measured={Boolean(measured)} sx={{ mt: 1 }} />
               </li>
             </Box>
 
-            {measure.isPending && (
-              <UploadProgress progress={measure.progress} afterSent="Measuring the swatch…" />
-            )}
-            {measure.isError && (
-              <Alert severity="error" role="alert">
-                <strong>The swatch could not be measured.</strong> {errorMessage(measure.error)}
-              </Alert>
-            )}
+            <MeasurePhotoStatus measure={measure} />
 
             {measured && !measure.isPending && (
               <Stack spacing={1.5}>

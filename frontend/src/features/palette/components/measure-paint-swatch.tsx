@@ -11,10 +11,8 @@ import { useId, useState } from 'react';
 import { KindCardButtons } from '@/components/cards/card-pdf-buttons';
 import { roundLab } from '@/components/colour/round-lab';
 import { MeasureWarnings } from '@/components/photo/measure-warnings';
-import { PhotoPicker } from '@/components/photo/photo-picker';
-import { UploadProgress } from '@/components/photo/upload-progress';
+import { MeasurePhotoPicker, MeasurePhotoStatus } from '@/components/photo/measure-photo-step';
 import { SwatchStage } from '@/components/ui/swatch-stage';
-import { errorMessage } from '@/lib/error-words';
 import { useMeasurePaintSwatch } from '../api/measure-paint-swatch';
 
 /**
@@ -93,30 +91,11 @@ export function MeasurePaintSwatch({ onReading }: { onReading: (lab: Lab) => voi
                   <strong>Send the photo.</strong> Nothing is kept: the reading goes into this form
                   for you to save.
                 </Typography>
-                <PhotoPicker
-                  label={
-                    measured || measure.isError
-                      ? 'Measure another photo'
-                      : 'Take or choose the photo'
-                  }
-                  clearAfterPick
-                  disabled={measure.isPending}
-                  onPick={(photo) => {
-                    if (photo) measure.mutate(photo);
-                  }}
-                  sx={{ mt: 1 }}
-                />
+                <MeasurePhotoPicker measure={measure} measured={Boolean(measured)} sx={{ mt: 1 }} />
               </li>
             </Box>
 
-            {measure.isPending && (
-              <UploadProgress progress={measure.progress} afterSent="Measuring the swatch…" />
-            )}
-            {measure.isError && (
-              <Alert severity="error" role="alert">
-                <strong>The swatch could not be measured.</strong> {errorMessage(measure.error)}
-              </Alert>
-            )}
+            <MeasurePhotoStatus measure={measure} />
 
             {measured && (
               <Stack spacing={1.5}>
