@@ -142,6 +142,15 @@ export class AssignmentsService {
             )
           ).map((r) => [r.class_id, r.students]),
         );
+    // One pass over the attempts (newest first), grouped by assignment and student: a class of 30
+    // with a dozen assignments would otherwise scan every attempt 360 times.
+    const byCell = new Map<string, { state: never; pass: boolean | null; createdAt: Date }[]>();
+    for (const a of attempts) {
+      const key = `${a.assignment_id}/${a.student_id}`;
+      const list = byCell.get(key) ?? [];
+      if (list.length === 0) byCell.set(key, list);
+      list.push({ state: a.state, pass: a.pass, createdAt: a.created_at });
+    }
     return rows.map((row) => {
       const view: AssignmentView = {
         id: row.id,
@@ -152,8 +161,7 @@ export class AssignmentsService {
         note: row.note,
         createdAt: row.created_at,
       };
-      const of = (studentId: string) =>
-        attempts.filter((a) => a.assignment_id === row.id && a.student_id === studentId).map((a) => ({ state: a.state, pass: a.pass, createdAt: a.created_at }));
+      const of = (studentId: string) => byCell.get(`${row.id}/${studentId}`) ?? [];
       if (forStudent) {
         view.status = assignmentStatus(of(caller.id), row.due_at);
       } else {

@@ -64,7 +64,16 @@ export class ProgressService {
       `SELECT u.id, u.display_name, u.email FROM class_members m JOIN users u ON u.id = m.student_id WHERE m.class_id = $1 ORDER BY u.display_name`,
       [classId],
     );
-    const attempts = await this.attempts('s.class_id = $1', [classId]);
+    // The gradebook needs no mark (its JSON is the heavy part of a row): leave it out, and group
+    // the attempts by cell in one pass instead of scanning them all for every cell.
+    const attempts = await this.attempts('s.class_id = $1', [classId], { withMark: false });
+    const byCell = new Map<string, AttemptRow[]>();
+    for (const t of attempts) {
+      const key = `${t.assignment_id}/${t.student_id}`;
+      const list = byCell.get(key) ?? [];
+      if (list.length === 0) byCell.set(key, list);
+      list.push(t);
+    }
     return {
       classId,
       className: klass.name,
@@ -75,7 +84,7 @@ export class ProgressService {
         email: s.email,
         cells: Object.fromEntries(
           assignments.map((a) => {
-            const mine = attempts.filter((t) => t.student_id === s.id && t.assignment_id === a.id); // newest first
+            const mine = byCell.get(`${a.id}/${s.id}`) ?? []; // newest first
             const scores = mine.map((t) => t.score).filter((v): v is number => v !== null);
             const cell: GradebookCell = {
               status: assignmentStatus(mine.map((t) => ({ state: t.state as never, pass: t.pass, createdAt: t.created_at })), a.due_at),
@@ -92,9 +101,9 @@ export class ProgressService {
   }
 
   /** Attempts with the effective (override-first) score and pass, newest first. */
-  private attempts(where: string, params: unknown[]): Promise<AttemptRow[]> {
+  private attempts(where: string, params: unknown[], { withMark = true } = {}): Promise<AttemptRow[]> {
     return this.dataSource.query<AttemptRow[]>(
-      `SELECT a.id, a.student_id, a.assignment_id, a.state, a.mark, a.created_at,
+      `SELECT a.id, a.student_id, a.assignment_id, a.state, ${withMark ? 'a.mark' : 'NULL AS mark'}, a.created_at,
               COALESCE(a.override_pass, a.pass) AS pass, COALESCE(a.override_score, a.score) AS score
          FROM attempts a LEFT JOIN assignments s ON s.id = a.assignment_id
         WHERE ${where} ORDER BY a.created_at DESC`,
