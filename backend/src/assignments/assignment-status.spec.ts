@@ -1,5 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
-import { assignmentStatus, type AttemptFacts } from './assignment-status';
+import { assignmentStatus, statusFromSummary, type AttemptFacts } from './assignment-status';
 
 const due = new Date('2026-12-10T18:00:00Z');
 const before = new Date('2026-12-09T12:00:00Z');
@@ -27,5 +27,16 @@ describe('assignmentStatus', () => {
 
   it('should say failed when the newest graded attempt did not pass', () => {
     expect(assignmentStatus([attempt('graded', false)], due, before)).toBe('failed');
+  });
+
+  it('should give the same status from the summary PostgreSQL reduces the attempts to, for every list of up to three', () => {
+    const states: AttemptFacts['state'][] = ['queued', 'measuring', 'graded', 'needs-retake', 'failed'];
+    const one = states.flatMap((state) => (state === 'graded' ? [attempt(state, true), attempt(state, false), attempt(state, null)] : [attempt(state)]));
+    const lists: AttemptFacts[][] = [[]];
+    for (let n = 0; n < 3; n += 1) for (const list of [...lists]) if (list.length === n) for (const a of one) lists.push([...list, a]);
+    for (const list of lists) {
+      const summary = list.length ? { passed: list.some((a) => a.state === 'graded' && a.pass === true), latestState: list[0].state } : undefined;
+      for (const now of [before, after]) expect(statusFromSummary(summary, due, now)).toBe(assignmentStatus(list, due, now));
+    }
   });
 });

@@ -13,10 +13,30 @@ export interface AttemptFacts {
  * stands; otherwise the newest attempt decides; nothing handed in after the due date is late.
  */
 export function assignmentStatus(attempts: AttemptFacts[], dueAt: Date, now = new Date()): AssignmentStatus {
-  if (attempts.some((a) => a.state === 'graded' && a.pass === true)) return 'passed';
-  const latest = attempts[0];
-  if (!latest) return now > dueAt ? 'late' : 'not-started';
-  if (latest.state === 'queued' || latest.state === 'measuring') return 'submitted';
-  if (latest.state === 'needs-retake' || latest.state === 'failed') return now > dueAt ? 'late' : 'needs-retake';
+  return statusFromSummary(
+    attempts.length
+      ? { passed: attempts.some((a) => a.state === 'graded' && a.pass === true), latestState: attempts[0].state }
+      : undefined,
+    dueAt,
+    now,
+  );
+}
+
+/** All the status rule needs of a student's attempts: whether any graded one passed, and the newest one's state. */
+export interface AttemptSummary {
+  passed: boolean;
+  latestState: AttemptFacts['state'];
+}
+
+/**
+ * The same rule from a summary (undefined: no attempts), for lists that let PostgreSQL reduce the
+ * attempts to one row per student and assignment.
+ */
+export function statusFromSummary(summary: AttemptSummary | undefined, dueAt: Date, now = new Date()): AssignmentStatus {
+  if (summary?.passed) return 'passed';
+  if (!summary) return now > dueAt ? 'late' : 'not-started';
+  const latest = summary.latestState;
+  if (latest === 'queued' || latest === 'measuring') return 'submitted';
+  if (latest === 'needs-retake' || latest === 'failed') return now > dueAt ? 'late' : 'needs-retake';
   return 'failed';
 }

@@ -5,7 +5,7 @@ import { DataSource, Repository } from 'typeorm';
 import { ClassesService } from '../classes/classes.service';
 import type { AuthUser } from '../common/decorators/current-user.decorator';
 import { DrillsService } from '../drills/drills.service';
-import { assignmentStatus, type AssignmentStatus } from './assignment-status';
+import { statusFromSummary, type AssignmentStatus, type AttemptSummary } from './assignment-status';
 import { Assignment } from './entities/assignment.entity';
 
 export interface AssignmentView {
@@ -126,10 +126,13 @@ export class AssignmentsService {
     if (rows.length === 0) return [];
     const ids = rows.map((r) => r.id);
     const forStudent = caller.role === 'student';
-    const attempts = await this.dataSource.query<{ assignment_id: string; student_id: string; state: never; pass: boolean | null; created_at: Date }[]>(
-      `SELECT assignment_id, student_id, state, COALESCE(override_pass, pass) AS pass, created_at
+    // One row per student and assignment, reduced by PostgreSQL to what the status rule needs.
+    const cells = await this.dataSource.query<{ assignment_id: string; student_id: string; passed: boolean; latest_state: AttemptSummary['latestState'] }[]>(
+      `SELECT assignment_id, student_id,
+              bool_or(state = 'graded' AND COALESCE(override_pass, pass)) IS TRUE AS passed,
+              (array_agg(state ORDER BY created_at DESC))[1] AS latest_state
          FROM attempts WHERE assignment_id = ANY($1) ${forStudent ? 'AND student_id = $2' : ''}
-        ORDER BY created_at DESC`,
+        GROUP BY assignment_id, student_id`,
       forStudent ? [ids, caller.id] : [ids],
     );
     const rosters = forStudent
@@ -142,15 +145,7 @@ export class AssignmentsService {
             )
           ).map((r) => [r.class_id, r.students]),
         );
-    // One pass over the attempts (newest first), grouped by assignment and student: a class of 30
-    // with a dozen assignments would otherwise scan every attempt 360 times.
-    const byCell = new Map<string, { state: never; pass: boolean | null; createdAt: Date }[]>();
-    for (const a of attempts) {
-      const key = `${a.assignment_id}/${a.student_id}`;
-      const list = byCell.get(key) ?? [];
-      if (list.length === 0) byCell.set(key, list);
-      list.push({ state: a.state, pass: a.pass, createdAt: a.created_at });
-    }
+    const byCell = new Map(cells.map((c) => [`${c.assignment_id}/${c.student_id}`, { passed: c.passed, latestState: c.latest_state }]));
     return rows.map((row) => {
       const view: AssignmentView = {
         id: row.id,
@@ -161,12 +156,12 @@ export class AssignmentsService {
         note: row.note,
         createdAt: row.created_at,
       };
-      const of = (studentId: string) => byCell.get(`${row.id}/${studentId}`) ?? [];
+      const of = (studentId: string) => byCell.get(`${row.id}/${studentId}`);
       if (forStudent) {
-        view.status = assignmentStatus(of(caller.id), row.due_at);
+        view.status = statusFromSummary(of(caller.id), row.due_at);
       } else {
         const counts: Record<AssignmentStatus, number> = { 'not-started': 0, submitted: 0, 'needs-retake': 0, passed: 0, failed: 0, late: 0 };
-        for (const studentId of rosters.get(row.class_id) ?? []) counts[assignmentStatus(of(studentId), row.due_at)] += 1;
+        for (const studentId of rosters.get(row.class_id) ?? []) counts[statusFromSummary(of(studentId), row.due_at)] += 1;
         view.counts = counts;
       }
       return view;
