@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchBrowser, screenshot, viewports, watchForeignRequests } from './browser';
+import { register, shootBoth } from './flows';
 import { renderSyntheticPhoto } from './synthetic-photo';
 
 const baseUrl = inject('baseUrl');
@@ -8,29 +9,6 @@ const outputDir = inject('outputDir');
 const stamp = Date.now().toString(36);
 const password = 'a long enough password';
 const drillTitle = `Burnt orange match ${stamp}`;
-
-/** A full-page screenshot at phone width and at desk width, back at the width it was at. */
-async function shootBoth(page: Page, name: string) {
-  const before = page.viewportSize();
-  for (const viewport of Object.values(viewports)) {
-    await page.setViewportSize(viewport);
-    await page.waitForTimeout(150);
-    // Nothing may push the page wider than the screen (wide tables scroll inside their box).
-    const scrollWidth = await page.evaluate(() => document.documentElement.scrollWidth);
-    expect(scrollWidth, `${name} at ${viewport.width} px`).toBeLessThanOrEqual(viewport.width);
-    await screenshot(page, outputDir, name);
-  }
-  if (before) await page.setViewportSize(before);
-}
-
-async function register(page: Page, role: 'teacher' | 'student', name: string, email: string) {
-  await page.goto(`${baseUrl}/register${role === 'teacher' ? '?role=teacher' : ''}`);
-  await page.getByRole('heading', { name: 'Create your account' }).waitFor();
-  await page.getByLabel('Your name').fill(name);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Create account' }).click();
-}
 
 /** Picks an option of an MUI select by its visible label. */
 async function choose(page: Page, label: string, option: string) {
@@ -65,7 +43,7 @@ describe('the teaching loop in Chromium', () => {
 
   it('should let a teacher sign up, create a class and a drill, and assign it', async () => {
     await shootBothAfter(teacher, `${baseUrl}/sign-in`, 'sign-in', () => teacher.getByRole('heading', { name: 'Sign in' }).waitFor());
-    await register(teacher, 'teacher', 'Marta Ocheltree', `marta.${stamp}@example.test`);
+    await register(teacher, baseUrl, { role: 'teacher', name: 'Marta Ocheltree', email: `marta.${stamp}@example.test`, password });
     await teacher.getByRole('heading', { name: 'Your studio' }).waitFor();
 
     await teacher.getByLabel('New class name').fill('Thursday watercolour');
@@ -75,7 +53,7 @@ describe('the teaching loop in Chromium', () => {
     const codeLabel = await teacher.getByLabel(/^Class code /).getAttribute('aria-label');
     classCode = (codeLabel ?? '').replace('Class code ', '').replace(/\s/g, '');
     expect(classCode).toMatch(/^[23456789A-Z]{6}$/);
-    await shootBoth(teacher, 'teacher-class');
+    await shootBoth(teacher, outputDir, 'teacher-class');
 
     await teacher.goto(`${baseUrl}/teacher/drills/new`);
     await teacher.getByRole('heading', { name: 'New drill' }).waitFor();
@@ -90,24 +68,24 @@ describe('the teaching loop in Chromium', () => {
     await teacher.getByLabel('Paint 1 pigments').fill('PY35');
     await teacher.getByText('Handle with care').waitFor();
     await choose(teacher, 'Who can see it', 'Everyone, in the public practice library');
-    await shootBoth(teacher, 'drill-editor');
+    await shootBoth(teacher, outputDir, 'drill-editor');
     await teacher.getByRole('button', { name: 'Create the drill' }).click();
     await teacher.getByRole('heading', { name: 'Your drills' }).waitFor();
     await teacher.getByRole('heading', { name: drillTitle }).waitFor();
-    await shootBoth(teacher, 'teacher-drills');
+    await shootBoth(teacher, outputDir, 'teacher-drills');
 
     await teacher.getByRole('link', { name: `Assign ${drillTitle}` }).click();
     await teacher.getByRole('heading', { name: 'Assign a drill' }).waitFor();
     await choose(teacher, 'Class', 'Thursday watercolour');
     await teacher.getByLabel('Note for the students (optional)').fill('Let each layer dry before you judge it.');
-    await shootBoth(teacher, 'assign');
+    await shootBoth(teacher, outputDir, 'assign');
     await teacher.getByRole('button', { name: 'Assign' }).click();
     await teacher.getByRole('heading', { name: 'Thursday watercolour' }).waitFor();
     await teacher.getByRole('cell', { name: drillTitle, exact: true }).waitFor();
   });
 
   it('should let a student join by code, upload a photo and see the mark', async () => {
-    await register(student, 'student', 'Pip Lindqvist', `pip.${stamp}@example.test`);
+    await register(student, baseUrl, { role: 'student', name: 'Pip Lindqvist', email: `pip.${stamp}@example.test`, password });
     await student.getByRole('heading', { name: 'Your assignments' }).waitFor();
     await student.getByText('No assignments yet').waitFor();
     await student.getByRole('link', { name: 'Join a class', exact: true }).click();
@@ -116,14 +94,14 @@ describe('the teaching loop in Chromium', () => {
     await student.getByText(/You joined Thursday watercolour/).waitFor();
     await student.getByRole('heading', { name: 'Your assignments' }).waitFor();
     await student.getByRole('heading', { name: drillTitle }).waitFor();
-    await shootBoth(student, 'student-assignments');
+    await shootBoth(student, outputDir, 'student-assignments');
 
     await student.getByRole('link', { name: `Open ${drillTitle}` }).click();
     await student.getByRole('heading', { name: drillTitle }).waitFor();
     await student.getByText('How to photograph your swatch').waitFor();
     await student.getByRole('img', { name: /Preview of the reference card/ }).waitFor();
     await student.getByText(/Print at 100 %, no scaling, on matte paper/).waitFor();
-    await shootBoth(student, 'student-drill');
+    await shootBoth(student, outputDir, 'student-drill');
 
     const jpeg = renderSyntheticPhoto({
       kind: 'match', swatches: [{ L: 52, a: 28, b: 40 }], width: 1600, height: 1200, cardFraction: 0.45,
@@ -138,21 +116,21 @@ describe('the teaching loop in Chromium', () => {
     await student.getByText(/^(Pass|Not yet) · \d+\/100$/).waitFor({ timeout: 60_000 });
     await student.getByRole('heading', { name: 'What to change' }).waitFor();
     await student.getByRole('img', { name: /measured window marked/ }).waitFor();
-    await shootBoth(student, 'student-result');
+    await shootBoth(student, outputDir, 'student-result');
     await student.getByLabel('Value only (greyscale)').check();
     await screenshot(student, outputDir, 'student-result-greyscale');
 
     await student.getByRole('link', { name: 'History' }).click();
     await student.getByRole('heading', { name: 'Your attempts' }).waitFor();
     await student.getByRole('cell', { name: drillTitle, exact: true }).waitFor();
-    await shootBoth(student, 'student-history');
+    await shootBoth(student, outputDir, 'student-history');
 
     await student.getByRole('link', { name: 'Progress', exact: true }).click();
     await student.getByRole('heading', { name: 'Your progress' }).waitFor();
     await student.getByRole('figure', { name: 'Overall difference (ΔE00)' }).locator('svg').first().waitFor();
     await student.getByRole('table', { name: /The same numbers, week by week/ }).waitFor();
     await student.getByText('Practice streak').waitFor();
-    await shootBoth(student, 'student-progress');
+    await shootBoth(student, outputDir, 'student-progress');
 
     await student.getByRole('link', { name: 'My palette', exact: true }).click();
     await student.getByRole('heading', { name: 'My palette' }).waitFor();
@@ -161,7 +139,7 @@ describe('the teaching loop in Chromium', () => {
     await student.getByRole('button', { name: 'Add paint' }).click();
     await student.getByRole('heading', { name: 'Deep yellow' }).waitFor();
     await student.getByText('Handle with care').waitFor();
-    await shootBoth(student, 'student-palette');
+    await shootBoth(student, outputDir, 'student-palette');
   });
 
   it('should word the error when the upload is not a photo', async () => {
@@ -174,13 +152,13 @@ describe('the teaching loop in Chromium', () => {
     const alert = student.getByRole('alert');
     await alert.waitFor();
     expect((await alert.textContent())?.length).toBeGreaterThan(10);
-    await shootBoth(student, 'student-upload-error');
+    await shootBoth(student, outputDir, 'student-upload-error');
   });
 
   it('should let the teacher review the attempt and override the mark', async () => {
     await teacher.getByRole('link', { name: 'Dashboard' }).click();
     await teacher.getByRole('heading', { name: 'Your studio' }).waitFor();
-    await shootBoth(teacher, 'teacher-dashboard');
+    await shootBoth(teacher, outputDir, 'teacher-dashboard');
     await teacher.getByRole('link', { name: `Attempts for ${drillTitle}` }).click();
     await teacher.getByRole('cell', { name: 'Pip Lindqvist' }).waitFor();
     await teacher.getByRole('link', { name: 'Review' }).click();
@@ -191,7 +169,7 @@ describe('the teaching loop in Chromium', () => {
     await teacher.getByLabel('Comment for the student').fill('The value is right; the mix is a little too grey. Less blue next time.');
     await teacher.getByRole('button', { name: 'Save the mark' }).click();
     await teacher.getByText('Mark saved; the student has been told.').waitFor();
-    await shootBoth(teacher, 'teacher-review');
+    await shootBoth(teacher, outputDir, 'teacher-review');
 
     await student.goto(attemptUrl);
     await student.getByText('Not yet · 74/100').waitFor();
@@ -204,7 +182,7 @@ describe('the teaching loop in Chromium', () => {
     await teacher.getByRole('link', { name: /Thursday watercolour/ }).first().click();
     await teacher.getByRole('heading', { name: 'Thursday watercolour' }).waitFor();
     await teacher.getByRole('figure', { name: 'Pass rate' }).locator('svg').first().waitFor();
-    await shootBoth(teacher, 'teacher-class-progress');
+    await shootBoth(teacher, outputDir, 'teacher-class-progress');
 
     await teacher.getByRole('link', { name: 'Gradebook' }).click();
     await teacher.getByRole('heading', { name: 'Gradebook: Thursday watercolour' }).waitFor();
@@ -214,7 +192,7 @@ describe('the teaching loop in Chromium', () => {
     await cell.waitFor();
     const [download] = await Promise.all([teacher.waitForEvent('download'), teacher.getByRole('button', { name: 'Download CSV' }).click()]);
     expect(download.suggestedFilename()).toMatch(/^gradebook-.+\.csv$/);
-    await shootBoth(teacher, 'teacher-gradebook');
+    await shootBoth(teacher, outputDir, 'teacher-gradebook');
     await cell.click();
     await teacher.getByRole('heading', { name: `Pip Lindqvist: ${drillTitle}` }).waitFor();
 
@@ -223,7 +201,7 @@ describe('the teaching loop in Chromium', () => {
     await teacher.getByRole('link', { name: 'Pip Lindqvist: progress' }).click();
     await teacher.getByRole('heading', { name: 'Progress of Pip Lindqvist' }).waitFor();
     await teacher.getByRole('figure', { name: 'Value error (|ΔL*|)' }).locator('svg').first().waitFor();
-    await shootBoth(teacher, 'teacher-student-progress');
+    await shootBoth(teacher, outputDir, 'teacher-student-progress');
     expect([...teacherForeign, ...studentForeign]).toEqual([]);
   });
 });
@@ -231,5 +209,5 @@ describe('the teaching loop in Chromium', () => {
 async function shootBothAfter(page: Page, url: string, name: string, ready: () => Promise<unknown>) {
   await page.goto(url);
   await ready();
-  await shootBoth(page, name);
+  await shootBoth(page, outputDir, name);
 }

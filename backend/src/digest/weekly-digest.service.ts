@@ -17,14 +17,10 @@ import {
 import { ProgressService } from '../progress/progress.service';
 import { User } from '../users/entities/user.entity';
 import type { IsoWeek } from './iso-week';
+import { rowsOf } from '../common/database/rows-of';
 
 /** What became of one person's digest for one week. */
 export type DigestOutcome = 'sent' | 'already-sent' | 'nothing-to-say' | 'opted-out' | 'failed';
-
-/** TypeORM answers INSERT … RETURNING with rows, UPDATE with [rows, count]. */
-function rowsOf<T>(result: unknown): T[] {
-  return (Array.isArray(result) && Array.isArray(result[0]) ? result[0] : result) as T[];
-}
 
 const dayMs = 86_400_000;
 /** Statuses that mean "still to do" for the student. */

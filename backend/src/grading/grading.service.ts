@@ -12,11 +12,7 @@ import { renderOverlay } from '../measurement/render-overlay';
 import { PhotoStorage } from '../storage/photo-storage';
 import { User } from '../users/entities/user.entity';
 import { gradeMeasurement } from './grade-photo';
-
-/** TypeORM answers UPDATE … RETURNING with [rows, count]; SELECT with rows. */
-function rowsOf<T>(result: unknown): T[] {
-  return (Array.isArray(result) && Array.isArray(result[0]) ? result[0] : result) as T[];
-}
+import { rowsOf } from '../common/database/rows-of';
 
 /**
  * Measures and grades one attempt. Safe to run twice for the same attempt, even at once: the
