@@ -33,7 +33,20 @@ export async function screenshot(page: Page, outputDir: string, name: string): P
   mkdirSync(outputDir, { recursive: true });
   const width = page.viewportSize()?.width ?? 0;
   const path = join(outputDir, `${name}-${width}.png`);
-  await page.screenshot({ path, fullPage: true });
+  // A full-page capture resizes the page, which re-lays out charts that follow their box; on a
+  // busy 2-core machine Chromium once sat on such a capture past 30 s (fonts loaded, capture never
+  // done). So: animations off, a shorter wait, one more try, then the visible part only (the
+  // screenshot is for people to look at; the test's checks are elsewhere).
+  for (const attempt of [1, 2]) {
+    try {
+      await page.screenshot({ path, fullPage: true, animations: 'disabled', timeout: 15_000 });
+      return path;
+    } catch (error) {
+      console.warn(`full-page screenshot ${name}-${width} try ${attempt} failed: ${(error as Error).message.split('\n')[0]}`);
+      await page.waitForTimeout(500);
+    }
+  }
+  await page.screenshot({ path, animations: 'disabled', timeout: 15_000 });
   return path;
 }
 
