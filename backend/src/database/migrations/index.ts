@@ -1,10 +1,12 @@
 import { CreateStudiosAndUsers1764633600000 } from './1764633600000-CreateStudiosAndUsers';
 import { CreateTeachingDomain1764637200000 } from './1764637200000-CreateTeachingDomain';
 import { AddWeeklyDigestPreference1764723600000 } from './1764723600000-AddWeeklyDigestPreference';
+import { AddAttemptOverlayPlan1764810000000 } from './1764810000000-AddAttemptOverlayPlan';
 
 /** Every migration, oldest first. Listed by hand so no glob or folder path is needed at run time. */
 export const migrations = [
   CreateStudiosAndUsers1764633600000,
   CreateTeachingDomain1764637200000,
   AddWeeklyDigestPreference1764723600000,
+  AddAttemptOverlayPlan1764810000000,
 ];
