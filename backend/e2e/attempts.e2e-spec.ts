@@ -93,6 +93,12 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
 
     const overlay = await request(http).get(`/api/attempts/${created.body.id}/overlay`).set(student.auth).expect(200);
     expect(overlay.headers['content-type']).toBe('image/png');
+    // Drawn on this first view from the stored photo, at most 1280 px long, then kept: the
+    // teacher's view gets the same bytes.
+    const drawn = await sharp(overlay.body).metadata();
+    expect(Math.max(drawn.width!, drawn.height!)).toBeLessThanOrEqual(1280);
+    const again = await request(http).get(`/api/attempts/${created.body.id}/overlay`).set(teacher.auth).expect(200);
+    expect(Buffer.compare(again.body, overlay.body)).toBe(0);
     const stored = await request(http).get(`/api/attempts/${created.body.id}/photo`).set(student.auth).expect(200);
     expect(stored.headers['content-type']).toBe('image/jpeg');
 

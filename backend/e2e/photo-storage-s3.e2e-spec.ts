@@ -41,7 +41,7 @@ describe('photos in an S3-compatible bucket (e2e, real PostgreSQL and a local S3
     rmSync(dir, { recursive: true, force: true });
   });
 
-  it('should store the upload and its overlay in the bucket, grade it from there and serve it back', async () => {
+  it('should store the upload in the bucket, grade it from there, draw its overlay there on first view and serve both back', async () => {
     expect(app.get(PhotoStorage)).toBeInstanceOf(S3PhotoStorage);
     const http = app.getHttpServer();
     const teacher = await registerAccount(app, 'teacher');
@@ -61,8 +61,13 @@ describe('photos in an S3-compatible bucket (e2e, real PostgreSQL and a local S3
     expect(state).toBe('graded');
     const photo = await client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/photo.jpg` }));
     expect(photo.ContentType).toBe('image/jpeg');
+    // The overlay is drawn when first opened, from the photo in the bucket, and then kept there.
+    await expect(client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/overlay.png` }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
+    const drawn = await request(http).get(`/api/attempts/${id}/overlay`).set(student.auth).expect(200);
+    expect(drawn.headers['content-type']).toBe('image/png');
     const overlay = await client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/overlay.png` }));
     expect(overlay.ContentType).toBe('image/png');
+    expect(overlay.ContentLength).toBe(drawn.body.length);
     const served = await request(http).get(`/api/attempts/${id}/photo`).set(student.auth).expect(200);
     expect(served.headers['content-type']).toBe('image/jpeg');
     expect(Number(served.headers['content-length'])).toBe(photo.ContentLength);

@@ -22,6 +22,7 @@ import { MailService } from '../mail/mail.service';
 import { attemptMarkedMail } from '../mail/templates';
 import { sniffImageType } from '../measurement/decode-photo';
 import { PhotoFileError } from '../measurement/measurement-issue';
+import { renderOverlayFromPhoto } from '../measurement/render-overlay';
 import { PhotoStorage } from '../storage/photo-storage';
 import { storablePhoto, type StorablePhoto } from '../storage/storable-photo';
 import { User } from '../users/entities/user.entity';
@@ -115,9 +116,23 @@ export class AttemptsService {
   async image(caller: AuthUser, id: string, which: 'photo' | 'overlay'): Promise<Buffer> {
     const attempt = await this.findVisible(caller, id);
     const key = which === 'photo' ? attempt.photoKey : attempt.overlayKey;
-    const bytes = key ? await this.storage.get(key) : undefined;
+    const bytes = key ? ((await this.storage.get(key)) ?? (which === 'overlay' ? await this.drawOverlay(attempt) : undefined)) : undefined;
     if (!bytes) throw new NotFoundException({ code: 'not_found', message: which === 'overlay' ? 'This attempt has no overlay yet.' : 'The photo of this attempt is missing.' });
     return bytes;
+  }
+
+  /**
+   * Draws an attempt's overlay the first time it is opened, from the stored photo and the plan
+   * grading kept, and stores it under the attempt's overlay key. Two first views at once draw
+   * the same bytes, so either write is right.
+   */
+  private async drawOverlay(attempt: Attempt): Promise<Buffer | undefined> {
+    const row = await this.attemptsRepository.findOne({ where: { id: attempt.id }, select: { id: true, overlayPlan: true } });
+    const photo = row?.overlayPlan ? await this.storage.get(attempt.photoKey) : undefined;
+    if (!row?.overlayPlan || !photo || !attempt.overlayKey) return undefined;
+    const png = await renderOverlayFromPhoto(photo, row.overlayPlan);
+    await this.storage.put(attempt.overlayKey, png);
+    return png;
   }
 
   /** A teacher's score and pass over the machine's, with a comment; the machine mark is kept. */

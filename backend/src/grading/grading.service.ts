@@ -8,7 +8,7 @@ import { Drill } from '../drills/entities/drill.entity';
 import { MailService } from '../mail/mail.service';
 import { attemptMarkedMail } from '../mail/templates';
 import { measurePhoto } from '../measurement/measure-photo';
-import { renderOverlay } from '../measurement/render-overlay';
+import { overlayPlan } from '../measurement/render-overlay';
 import { PhotoStorage } from '../storage/photo-storage';
 import { User } from '../users/entities/user.entity';
 import { gradeMeasurement } from './grade-photo';
@@ -62,23 +62,22 @@ export class GradingService {
     const photo = await this.storage.get(attempt.photoKey);
     if (!photo) throw new Error(`the stored photo ${attempt.photoKey} is missing`);
     const detail = await measurePhoto(photo);
-    let overlayKey: string | null = null;
-    if (detail.photo) {
-      overlayKey = `attempts/${attempt.id}/overlay.png`;
-      await this.storage.put(overlayKey, await renderOverlay(detail));
-    }
+    // The overlay is drawn when someone first opens it (AttemptsService.image); here only what
+    // it shows is kept, which costs nothing next to drawing and encoding a PNG per attempt.
+    const overlayKey = detail.photo ? `attempts/${attempt.id}/overlay.png` : null;
+    const plan = detail.photo ? JSON.stringify(overlayPlan(detail)) : null;
     const outcome = gradeMeasurement(drill, detail.result);
     const written = rowsOf<{ id: string }>(
       outcome.kind === 'graded'
         ? await this.dataSource.query(
-            `UPDATE attempts SET state = 'graded', readings = $3, mark = $4, score = $5, pass = $6, quality = $7, overlay_key = $8, graded_at = now()
+            `UPDATE attempts SET state = 'graded', readings = $3, mark = $4, score = $5, pass = $6, quality = $7, overlay_key = $8, overlay_plan = $9, graded_at = now()
               WHERE id = $1 AND tries = $2 AND state = 'measuring' RETURNING id`,
-            [attemptId, claim, JSON.stringify(outcome.readings), JSON.stringify(outcome.mark), outcome.mark.score, outcome.mark.pass, JSON.stringify({ errors: [], warnings: outcome.warnings }), overlayKey],
+            [attemptId, claim, JSON.stringify(outcome.readings), JSON.stringify(outcome.mark), outcome.mark.score, outcome.mark.pass, JSON.stringify({ errors: [], warnings: outcome.warnings }), overlayKey, plan],
           )
         : await this.dataSource.query(
-            `UPDATE attempts SET state = 'needs-retake', quality = $3, overlay_key = $4, graded_at = now()
+            `UPDATE attempts SET state = 'needs-retake', quality = $3, overlay_key = $4, overlay_plan = $5, graded_at = now()
               WHERE id = $1 AND tries = $2 AND state = 'measuring' RETURNING id`,
-            [attemptId, claim, JSON.stringify({ errors: outcome.errors, warnings: outcome.warnings }), overlayKey],
+            [attemptId, claim, JSON.stringify({ errors: outcome.errors, warnings: outcome.warnings }), overlayKey, plan],
           ),
     );
     if (written.length === 1 && outcome.kind === 'graded') await this.tellStudent(attempt, drill, outcome.mark);

@@ -3,79 +3,152 @@ import type { MmRect } from '../cards/card-layout.types';
 import { applyHomography } from './homography';
 import type { MeasurementDetail } from './measure-photo';
 
+/**
+ * What an overlay draws, in the upright original photo's pixels: small JSON that a grading
+ * worker keeps instead of drawing the picture, so the picture is drawn only when someone opens
+ * it (`renderOverlayFromPhoto`), from the stored photo.
+ */
+export type OverlayPlan = {
+  version: 1;
+  /** Size of the upright original photo the coordinates refer to. */
+  width: number;
+  height: number;
+  /** Quadrilaterals (four corners, clockwise) with their white stroke width in overlay pixels. */
+  outlines: { points: [number, number][]; stroke: number }[];
+  /** Each window's reading, written below it. */
+  labels: { x: number; y: number; text: string }[];
+  /** Errors and warnings, written top left. */
+  notes: string[];
+};
+
+/** The overlay's long side, px. */
+const overlaySide = 1280;
+
 const esc = (t: string): string =>
   t.replace(/[<>&]/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;' })[c]!);
 
+const round1 = (v: number): number => Math.round(v * 10) / 10;
+
 /**
- * A PNG of the photo (upright, at most 1280 px long) showing what was measured and where:
- * the card's outline, each sampled patch and window region, each window's reading, and the
- * errors and warnings. Neutral black-and-white strokes, so nothing coloured sits next to the
- * swatch.
+ * The overlay's content for a measurement: the card's outline, each marker (thicker where it
+ * was not read), each sampled patch and window region, each window's reading, and the errors and
+ * warnings.
  *
- * @param detail - from `measurePhoto`
- * @returns PNG bytes
+ * @param detail - from `measurePhoto`, with the decoded photo
+ * @returns the plan, in original-photo pixels
  */
-export async function renderOverlay(detail: MeasurementDetail): Promise<Buffer> {
+export function overlayPlan(detail: MeasurementDetail): OverlayPlan {
   const photo = detail.photo;
   if (!photo) throw new Error('Expected a decoded photo for the overlay but received none');
-  const { raster } = photo;
-  const k = Math.min(1, 1280 / Math.max(raster.width, raster.height));
-  const w = Math.round(raster.width * k);
-  const hgt = Math.round(raster.height * k);
-  const parts: string[] = [];
+  const outlines: OverlayPlan['outlines'] = [];
+  const labels: OverlayPlan['labels'] = [];
   const detection = detail.detection;
   if (detection) {
     const { homography: h, layout } = detection;
-    const poly = (r: MmRect): string =>
-      [
-        [r.x, r.y],
-        [r.x + r.w, r.y],
-        [r.x + r.w, r.y + r.h],
-        [r.x, r.y + r.h],
-      ]
-        .map(([x, y]) => applyHomography(h, x, y))
-        .map((p) => `${(p.x * k).toFixed(1)},${(p.y * k).toFixed(1)}`)
-        .join(' ');
-    const stroke = (r: MmRect, width: number): void => {
-      parts.push(
-        `<polygon points="${poly(r)}" fill="none" stroke="#000" stroke-width="${width + 2}"/>`,
-      );
-      parts.push(
-        `<polygon points="${poly(r)}" fill="none" stroke="#fff" stroke-width="${width}"/>`,
-      );
+    // The homography maps card mm to working-raster pixels; the plan is in original pixels.
+    const toOriginal = (x: number, y: number): [number, number] => {
+      const p = applyHomography(h, x, y);
+      return [round1(p.x / photo.scale), round1(p.y / photo.scale)];
     };
-    stroke({ x: 0, y: 0, w: layout.width, h: layout.height }, 2);
-    for (const m of layout.markers) stroke(m, detection.found.includes(m.corner) ? 1 : 3);
-    for (const p of layout.patches)
-      stroke({ x: p.x + 1.2, y: p.y + 1.2, w: p.w - 2.4, h: p.h - 2.4 }, 1);
+    const outline = (r: MmRect, stroke: number): void => {
+      outlines.push({
+        stroke,
+        points: [
+          toOriginal(r.x, r.y),
+          toOriginal(r.x + r.w, r.y),
+          toOriginal(r.x + r.w, r.y + r.h),
+          toOriginal(r.x, r.y + r.h),
+        ],
+      });
+    };
+    outline({ x: 0, y: 0, w: layout.width, h: layout.height }, 2);
+    for (const m of layout.markers) outline(m, detection.found.includes(m.corner) ? 1 : 3);
+    for (const p of layout.patches) outline({ x: p.x + 1.2, y: p.y + 1.2, w: p.w - 2.4, h: p.h - 2.4 }, 1);
     layout.windows.forEach((win, i) => {
       const inset = Math.max(2.5, 0.15 * Math.min(win.w, win.h));
-      stroke({ x: win.x + inset, y: win.y + inset, w: win.w - 2 * inset, h: win.h - 2 * inset }, 2);
+      outline({ x: win.x + inset, y: win.y + inset, w: win.w - 2 * inset, h: win.h - 2 * inset }, 2);
       const reading = detail.result.readings.find((r) => r.window === i);
       if (reading) {
-        const at = applyHomography(h, win.x, win.y + win.h + 4);
-        const text = `${i + 1}: L* ${reading.lab.L.toFixed(1)} a* ${reading.lab.a.toFixed(1)} b* ${reading.lab.b.toFixed(1)}`;
-        parts.push(
-          `<text x="${(at.x * k).toFixed(1)}" y="${(at.y * k).toFixed(1)}" font-family="DejaVu Sans, sans-serif" font-size="14" fill="#fff" stroke="#000" stroke-width="3" paint-order="stroke">${esc(text)}</text>`,
-        );
+        const [x, y] = toOriginal(win.x, win.y + win.h + 4);
+        labels.push({ x, y, text: `${i + 1}: L* ${reading.lab.L.toFixed(1)} a* ${reading.lab.a.toFixed(1)} b* ${reading.lab.b.toFixed(1)}` });
       }
     });
   }
-  const notes = [
-    ...detail.result.errors.map((e) => `error ${e.code}`),
-    ...detail.result.warnings.map((e) => `warning ${e.code}`),
-  ];
-  notes.forEach((note, i) => {
+  const notes = [...detail.result.errors.map((e) => `error ${e.code}`), ...detail.result.warnings.map((e) => `warning ${e.code}`)];
+  return { version: 1, width: photo.width, height: photo.height, outlines, labels, notes };
+}
+
+/** The overlay's size for a photo: long side at most 1280 px, never enlarged. */
+function overlaySize(plan: Pick<OverlayPlan, 'width' | 'height'>): { w: number; h: number; k: number } {
+  const k = Math.min(1, overlaySide / Math.max(plan.width, plan.height));
+  return { w: Math.max(1, Math.round(plan.width * k)), h: Math.max(1, Math.round(plan.height * k)), k };
+}
+
+/** The plan as an SVG of the overlay's size. Neutral black-and-white strokes, so nothing coloured sits next to the swatch. */
+function overlaySvg(plan: OverlayPlan, w: number, h: number, k: number): Buffer {
+  const parts: string[] = [];
+  for (const { points, stroke } of plan.outlines) {
+    const at = points.map(([x, y]) => `${(x * k).toFixed(1)},${(y * k).toFixed(1)}`).join(' ');
+    parts.push(`<polygon points="${at}" fill="none" stroke="#000" stroke-width="${stroke + 2}"/>`);
+    parts.push(`<polygon points="${at}" fill="none" stroke="#fff" stroke-width="${stroke}"/>`);
+  }
+  for (const { x, y, text } of plan.labels) {
+    parts.push(
+      `<text x="${(x * k).toFixed(1)}" y="${(y * k).toFixed(1)}" font-family="DejaVu Sans, sans-serif" font-size="14" fill="#fff" stroke="#000" stroke-width="3" paint-order="stroke">${esc(text)}</text>`,
+    );
+  }
+  plan.notes.forEach((note, i) => {
     parts.push(
       `<text x="10" y="${24 + i * 20}" font-family="DejaVu Sans, sans-serif" font-size="16" fill="#fff" stroke="#000" stroke-width="3" paint-order="stroke">${esc(note)}</text>`,
     );
   });
-  const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${hgt}">${parts.join('')}</svg>`;
-  return sharp(raster.data, { raw: { width: raster.width, height: raster.height, channels: 3 } })
-    .resize(w, hgt)
-    .composite([{ input: Buffer.from(svg), top: 0, left: 0 }])
-    // zlib level 3 instead of 6: about 40 % less time for about 3 % more bytes on a photo
-    // (measured here with sharp on a 1280 × 960 noisy image: 126 → 78 ms, 1.50 → 1.54 MB).
-    .png({ compressionLevel: 3 })
-    .toBuffer();
+  return Buffer.from(`<svg xmlns="http://www.w3.org/2000/svg" width="${w}" height="${h}">${parts.join('')}</svg>`);
+}
+
+/** Draws the plan over an already upright picture of the plan's size and encodes the PNG. */
+function drawOver(image: sharp.Sharp, plan: OverlayPlan): Promise<Buffer> {
+  const { w, h, k } = overlaySize(plan);
+  return (
+    image
+      .resize(w, h, { fit: 'fill' })
+      .composite([{ input: overlaySvg(plan, w, h, k), top: 0, left: 0 }])
+      // zlib level 3 instead of 6: about 40 % less time for about 3 % more bytes on a photo
+      // (measured here with sharp on a 1280 × 960 noisy image: 126 → 78 ms, 1.50 → 1.54 MB).
+      .png({ compressionLevel: 3 })
+      .toBuffer()
+  );
+}
+
+/**
+ * A PNG of the photo (upright, at most 1280 px long) showing what was measured and where, from
+ * the decoded photo in hand (the CLI and the swatch-measure routes).
+ *
+ * @param detail - from `measurePhoto`
+ * @returns PNG bytes
+ */
+export function renderOverlay(detail: MeasurementDetail): Promise<Buffer> {
+  const plan = overlayPlan(detail);
+  const { raster } = detail.photo!;
+  return drawOver(sharp(raster.data, { raw: { width: raster.width, height: raster.height, channels: 3 } }), plan);
+}
+
+/**
+ * The same PNG drawn later from the stored photo file and the plan kept with the attempt.
+ * libvips shrinks a JPEG while decoding it, so a 12 MP photo costs far less than a full decode.
+ *
+ * @param photo - the stored photo (JPEG, PNG or WebP; orientation tag honoured)
+ * @param plan - from `overlayPlan`, when the photo was measured
+ * @returns PNG bytes
+ */
+export async function renderOverlayFromPhoto(photo: Buffer, plan: OverlayPlan): Promise<Buffer> {
+  const { w, h } = overlaySize(plan);
+  // Decode straight to about the overlay's size (shrink-on-load), upright, then fit exactly.
+  const upright = await sharp(photo, { limitInputPixels: 100_000_000 })
+    .rotate()
+    .resize(w, h, { fit: 'fill' })
+    .removeAlpha()
+    .toColourspace('srgb')
+    .raw()
+    .toBuffer({ resolveWithObject: true });
+  return drawOver(sharp(upright.data, { raw: { width: upright.info.width, height: upright.info.height, channels: 3 } }), plan);
 }

@@ -1,5 +1,6 @@
 import type { AttemptState, Mark, QualityReport, Reading } from '@mixmark/common';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { OverlayPlan } from '../../measurement/render-overlay';
 
 export const attemptStates = ['queued', 'measuring', 'graded', 'needs-retake', 'failed'] as const satisfies readonly AttemptState[];
 export type { AttemptState, QualityReport };
@@ -27,8 +28,16 @@ export class Attempt {
   @Column({ name: 'photo_key', type: 'text' })
   photoKey: string;
 
+  /**
+   * Where the overlay PNG is (or will be) stored. Set when the photo was measured; the picture
+   * itself is drawn from `overlayPlan` the first time someone opens it.
+   */
   @Column({ name: 'overlay_key', type: 'text', nullable: true })
   overlayKey: string | null;
+
+  /** What the overlay draws (`measurement/render-overlay.ts`); not loaded unless asked for. */
+  @Column({ name: 'overlay_plan', type: 'jsonb', nullable: true, select: false })
+  overlayPlan?: OverlayPlan | null;
 
   @Column({ name: 'photo_bytes', type: 'integer' })
   photoBytes: number;

@@ -9,7 +9,7 @@ import { StudioClass } from '../../classes/entities/studio-class.entity';
 import { Drill } from '../../drills/entities/drill.entity';
 import { gradeMeasurement } from '../../grading/grade-photo';
 import { measurePhoto } from '../../measurement/measure-photo';
-import { renderOverlay } from '../../measurement/render-overlay';
+import { overlayPlan } from '../../measurement/render-overlay';
 import { casts, renderScene } from '../../measurement/testing/photo-scene';
 import { seededRandom } from '../../measurement/testing/seeded-random';
 import type { PhotoStorage } from '../../storage/photo-storage';
@@ -118,11 +118,9 @@ export async function seedTeaching(dataSource: DataSource, storage: PhotoStorage
     const stored = await storablePhoto(jpeg);
     const photoKey = `attempts/${id}/photo.${stored.extension}`;
     await storage.put(photoKey, stored.bytes);
-    let overlayKey: string | null = null;
-    if (detail.photo) {
-      overlayKey = `attempts/${id}/overlay.png`;
-      await storage.put(overlayKey, await renderOverlay(detail));
-    }
+    // As grading does: the overlay is drawn from this plan when someone first opens it.
+    const overlayKey = detail.photo ? `attempts/${id}/overlay.png` : null;
+    const plan = detail.photo ? overlayPlan(detail) : null;
     const student = byKey.get(studentKey)!;
     await dataSource.getRepository(Attempt).insert({
       id,
@@ -131,6 +129,7 @@ export async function seedTeaching(dataSource: DataSource, storage: PhotoStorage
       assignmentId,
       photoKey,
       overlayKey,
+      overlayPlan: plan,
       photoBytes: stored.bytes.length,
       tries: 1,
       createdAt: when,
