@@ -1,7 +1,8 @@
 // `npm run bench:uploads -w backend`: 4 MB phone-like photos uploaded to the real server and
 // graded by real worker processes, end to end (upload → stored → queued → measured → graded),
 // beside the floor measured in the same run: the same photo through the same code in this process
-// (the upload checks + metadata strip, and the measurement), one photo at a time on one core; and
+// (the upload checks + metadata strip, and the measurement), one photo at a time on one core, with
+// the overlay drawing workers did per photo before it moved to the first view; and
 // the metadata step alone, lossless strip (storablePhoto) beside the sharp re-encode it replaced.
 // Prints photos/s, photos/s per core and the peak memory (VmHWM) of the server and each worker.
 import { spawn } from 'node:child_process';
@@ -70,7 +71,7 @@ runMain(async () => {
   const { measurePhoto } = require(join(rootDir, 'backend/dist/measurement/measure-photo.js'));
   const { checkPhoto, sanitisePhoto } = require(join(rootDir, 'backend/dist/measurement/decode-photo.js'));
   const { storablePhoto } = require(join(rootDir, 'backend/dist/storage/storable-photo.js'));
-  const { renderOverlay } = require(join(rootDir, 'backend/dist/measurement/render-overlay.js'));
+  const { overlayPlan, renderOverlay, renderOverlayFromPhoto } = require(join(rootDir, 'backend/dist/measurement/render-overlay.js'));
 
   const load = loadavg()[0];
   console.error(`Rendering a 12 MP synthetic phone photo (load average ${load.toFixed(2)} on ${CORES} cores)...`);
@@ -85,19 +86,27 @@ runMain(async () => {
   let measureMs = 0;
   let pipelineMs = 0;
   let overlayMs = 0;
-  const cpu0 = process.cpuUsage();
+  let firstViewMs = 0;
+  let cpu = { user: 0, system: 0 };
   for (let i = 0; i < FLOOR_RUNS; i += 1) {
+    const cpu0 = process.cpuUsage();
     const t0 = performance.now();
     const { bytes: stored } = await storablePhoto(jpeg, limits); // checks included
     const t1 = performance.now();
     const detail = await measurePhoto(stored);
+    const plan = overlayPlan(detail);
     const t2 = performance.now();
+    const spent = process.cpuUsage(cpu0);
+    cpu = { user: cpu.user + spent.user, system: cpu.system + spent.system };
+    // What workers drew per attempt until December 2026, and what the first view draws now.
     await renderOverlay(detail);
-    overlayMs += performance.now() - t2;
+    const t3 = performance.now();
+    await renderOverlayFromPhoto(stored, plan);
+    firstViewMs += performance.now() - t3;
+    overlayMs += t3 - t2;
     measureMs += t2 - t1;
     pipelineMs += t2 - t0;
   }
-  const cpu = process.cpuUsage(cpu0);
   const floorCpuPerPhoto = (cpu.user + cpu.system) / 1e6 / FLOOR_RUNS;
   const floorMeasure = (1000 * FLOOR_RUNS) / measureMs;
   const floorPipeline = (1000 * FLOOR_RUNS) / pipelineMs;
@@ -189,12 +198,13 @@ runMain(async () => {
     console.log('case'.padEnd(72) + 'photos/s'.padStart(10) + 'per core'.padStart(10));
     console.log('floor: measurement alone, in-process, one at a time (1 core)'.padEnd(72) + floorMeasure.toFixed(2).padStart(10) + floorMeasure.toFixed(2).padStart(10));
     console.log('floor: upload checks + metadata strip + measurement, in-process (1 core)'.padEnd(72) + floorPipeline.toFixed(2).padStart(10) + floorPipeline.toFixed(2).padStart(10));
-    console.log('floor: the same + the overlay the worker draws, in-process (1 core)'.padEnd(72) + floorWithOverlay.toFixed(2).padStart(10) + floorWithOverlay.toFixed(2).padStart(10));
+    console.log('before: the same + drawing the overlay per photo, in-process (1 core)'.padEnd(72) + floorWithOverlay.toFixed(2).padStart(10) + floorWithOverlay.toFixed(2).padStart(10));
     console.log(
       `end to end: ${PHOTOS} uploads (${UPLOAD_CONCURRENCY} at once), 1 server + ${WORKERS} workers, until all graded`.padEnd(72) +
         e2e.toFixed(2).padStart(10) +
         (e2e / CORES).toFixed(2).padStart(10),
     );
+    console.log(`\noverlay, ms per photo: drawn from the measured raster ${(overlayMs / FLOOR_RUNS).toFixed(1)} ms (what workers did per attempt before); drawn on first view from the stored file ${(firstViewMs / FLOOR_RUNS).toFixed(1)} ms (now, once, only if opened)`);
     console.log(`\nmetadata step alone, in-process, ms per photo: checks + lossless strip (now, ${method}) ${stripMs.toFixed(1)} ms; checks + sharp re-encode (before) ${reencodeMs.toFixed(1)} ms`);
     console.log(`\n  uploads all accepted after ${((uploadsDoneAt - started) / 1000).toFixed(1)} s, all graded after ${seconds.toFixed(1)} s; states: ${states.map((s) => `${s.state} ${s.n}`).join(', ')}`);
     console.log(
