@@ -4,6 +4,7 @@ import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
 import { AppModule } from './app.module';
 import { guardAgainstDatabaseOutages } from './common/process/database-outage-guard';
+import { applyImageThreads } from './common/process/image-threads';
 import type { AllConfigType } from './config/config.type';
 import { configureApp } from './configure-app';
 
@@ -16,6 +17,7 @@ async function bootstrap(): Promise<void> {
   const app = await NestFactory.create(AppModule, { logger, bufferLogs: true });
   configureApp(app);
   const config = app.get(ConfigService<AllConfigType>);
+  applyImageThreads(config.getOrThrow('storage.imageThreads', { infer: true }));
   const host = config.getOrThrow('app.host', { infer: true });
   const port = config.getOrThrow('app.port', { infer: true });
   await app.listen(port, host);

@@ -1,8 +1,11 @@
 import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
 import { AppModule } from './app.module';
 import { guardAgainstDatabaseOutages } from './common/process/database-outage-guard';
+import { applyImageThreads } from './common/process/image-threads';
+import type { AllConfigType } from './config/config.type';
 
 /**
  * A grading worker: the same application without the HTTP listener, working the PostgreSQL
@@ -14,6 +17,7 @@ async function main(): Promise<void> {
   process.env.GRADING_IN_SERVER = 'true';
   const app = await NestFactory.createApplicationContext(AppModule, { logger: ['fatal', 'error', 'warn', 'log'] });
   app.enableShutdownHooks();
+  applyImageThreads(app.get(ConfigService<AllConfigType>).getOrThrow('storage.imageThreads', { infer: true }));
   Logger.log('Mixmark grading worker is working the queue', 'Worker');
 }
 

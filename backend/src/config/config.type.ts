@@ -67,6 +67,8 @@ export interface StorageConfig {
   gradingInServer: boolean;
   /** Grading jobs worked at once by one process. */
   gradingConcurrency: number;
+  /** libvips threads per image operation (0: one per core). */
+  imageThreads: number;
   /** Seconds a grading job may stay active before it counts as abandoned and is retried. */
   gradingExpireSeconds: number;
   /** Seconds between the queue's maintenance runs (expiring abandoned jobs, archiving). */

@@ -4,7 +4,13 @@ import { readStorageConfig } from './storage.config';
 describe('storage configuration', () => {
   it('should keep photos in the local folder unless told otherwise', () => {
     const config = readStorageConfig({ STORAGE_DIR: '/var/tmp/photos' });
-    expect(config).toMatchObject({ driver: 'local', s3: null, dir: '/var/tmp/photos', gradingExpireSeconds: 300, queueMaintenanceSeconds: 120 });
+    expect(config).toMatchObject({ driver: 'local', s3: null, dir: '/var/tmp/photos', gradingExpireSeconds: 300, queueMaintenanceSeconds: 120, imageThreads: 1 });
+  });
+
+  it('should take the libvips threads per image operation, 0 for one per core, and refuse a negative count', () => {
+    expect(readStorageConfig({ IMAGE_THREADS: '0' }).imageThreads).toBe(0);
+    expect(readStorageConfig({ IMAGE_THREADS: '4' }).imageThreads).toBe(4);
+    expect(() => readStorageConfig({ IMAGE_THREADS: '-1' })).toThrow(/IMAGE_THREADS/);
   });
 
   it('should read an S3-compatible bucket with its endpoint, path style and keys', () => {

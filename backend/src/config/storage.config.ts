@@ -24,6 +24,10 @@ const schema = object({
   UPLOAD_MAX_BYTES: number().integer().min(1024).max(200 * 1024 * 1024).default(20 * 1024 * 1024),
   GRADING_IN_SERVER: boolean().default(true),
   GRADING_CONCURRENCY: number().integer().min(1).max(32).default(1),
+  // libvips threads per image operation. 1 suits a server and workers that each run one photo's
+  // work per core (threads inside one operation only compete with the other processes); 0 lets
+  // libvips use one per core.
+  IMAGE_THREADS: number().integer().min(0).max(64).default(1),
   // How long a grading job may stay active before pg-boss counts its worker as dead and retries it
   // (a 12 MP photo takes a few seconds; the default leaves room for a slow machine).
   GRADING_EXPIRE_SECONDS: number().integer().min(1).max(3600).default(300),
@@ -61,6 +65,7 @@ export function readStorageConfig(env = process.env): StorageConfig {
     uploadMaxBytes: parsed.UPLOAD_MAX_BYTES,
     gradingInServer: parsed.GRADING_IN_SERVER,
     gradingConcurrency: parsed.GRADING_CONCURRENCY,
+    imageThreads: parsed.IMAGE_THREADS,
     gradingExpireSeconds: parsed.GRADING_EXPIRE_SECONDS,
     queueMaintenanceSeconds: parsed.QUEUE_MAINTENANCE_SECONDS,
   };
