@@ -73,6 +73,8 @@ runMain(async () => {
   const { storablePhoto } = require(join(rootDir, 'backend/dist/storage/storable-photo.js'));
   const { overlayPlan, renderOverlay, renderOverlayFromPhoto } = require(join(rootDir, 'backend/dist/measurement/render-overlay.js'));
 
+  // The floor runs image work as the server and workers do (IMAGE_THREADS, default 1 thread per operation).
+  require('sharp').concurrency(Number(process.env.IMAGE_THREADS ?? 1));
   const load = loadavg()[0];
   console.error(`Rendering a 12 MP synthetic phone photo (load average ${load.toFixed(2)} on ${CORES} cores)...`);
   const { jpeg } = await renderScene({
