@@ -22,7 +22,8 @@ export interface AssignmentView {
   counts?: Record<AssignmentStatus, number>;
 }
 
-const notFound = () => new NotFoundException({ code: 'not_found', message: 'There is no assignment with this id.' });
+const notFound = () =>
+  new NotFoundException({ code: 'not_found', message: 'There is no assignment with this id.' });
 
 interface Row {
   id: string;
@@ -35,6 +36,14 @@ interface Row {
   due_at: Date;
   note: string;
   created_at: Date;
+  /** Whether the caller is on the class's roster. */
+  is_member: boolean;
+  /** A student caller's own cell (null: nothing handed in). */
+  passed: boolean | null;
+  latest_state: AttemptSummary['latestState'] | null;
+  /** For a teacher or admin: [passed, newest state, how many roster students] groups, and the roster's size. */
+  groups: [boolean, AttemptSummary['latestState'], number][] | null;
+  roster: number | null;
 }
 
 @Injectable()
@@ -50,14 +59,22 @@ export class AssignmentsService {
     await this.classesService.findOwned(teacher, input.classId);
     await this.drillsService.findVisible(teacher, input.drillId);
     const saved = await this.assignmentsRepository.save(
-      this.assignmentsRepository.create({ classId: input.classId, drillId: input.drillId, dueAt: input.dueAt, note: input.note }),
+      this.assignmentsRepository.create({
+        classId: input.classId,
+        drillId: input.drillId,
+        dueAt: input.dueAt,
+        note: input.note,
+      }),
     );
     return this.findOne(teacher, saved.id);
   }
 
   /** Teachers: assignments of the classes they run; students: of the classes they are on, with their status. */
-  async findAll(caller: AuthUser, { classId }: { classId?: string } = {}): Promise<AssignmentView[]> {
-    const params: unknown[] = caller.role === 'admin' ? [] : [caller.id];
+  async findAll(
+    caller: AuthUser,
+    { classId }: { classId?: string } = {},
+  ): Promise<AssignmentView[]> {
+    const params: unknown[] = [caller.id];
     let where =
       caller.role === 'admin'
         ? 'TRUE'
@@ -68,18 +85,27 @@ export class AssignmentsService {
       params.push(classId);
       where += ` AND a.class_id = $${params.length}`;
     }
-    const rows = await this.dataSource.query<Row[]>(`${this.baseQuery()} WHERE ${where} ORDER BY a.due_at ASC`, params);
-    return this.withStatus(caller, rows);
+    const rows = await this.dataSource.query<Row[]>(
+      `${this.listQuery(caller)} WHERE ${where} ORDER BY a.due_at ASC`,
+      params,
+    );
+    return rows.map((row) => this.toView(caller, row));
   }
 
   async findOne(caller: AuthUser, id: string): Promise<AssignmentView> {
-    const [row] = await this.dataSource.query<Row[]>(`${this.baseQuery()} WHERE a.id = $1`, [id]);
-    if (!row || !(await this.canSee(caller, row))) throw notFound();
-    const [view] = await this.withStatus(caller, [row]);
-    return view;
+    const [row] = await this.dataSource.query<Row[]>(`${this.listQuery(caller)} WHERE a.id = $2`, [
+      caller.id,
+      id,
+    ]);
+    if (!row || !this.canSee(caller, row)) throw notFound();
+    return this.toView(caller, row);
   }
 
-  async update(teacher: AuthUser, id: string, input: UpdateAssignmentInput): Promise<AssignmentView> {
+  async update(
+    teacher: AuthUser,
+    id: string,
+    input: UpdateAssignmentInput,
+  ): Promise<AssignmentView> {
     const assignment = await this.findOwned(teacher, id);
     if (input.dueAt !== undefined) assignment.dueAt = input.dueAt;
     if (input.note !== undefined) assignment.note = input.note;
@@ -104,67 +130,81 @@ export class AssignmentsService {
   /** The assignment if this student is on its class (to attach an attempt to it). */
   async findForStudent(student: AuthUser, id: string): Promise<Assignment> {
     const assignment = await this.assignmentsRepository.findOneBy({ id });
-    if (!assignment || !(await this.classesService.isMember(student.id, assignment.classId))) throw notFound();
+    if (!assignment || !(await this.classesService.isMember(student.id, assignment.classId)))
+      throw notFound();
     return assignment;
   }
 
-  private async canSee(caller: AuthUser, row: Row): Promise<boolean> {
-    if (caller.role === 'admin' || row.teacher_id === caller.id) return true;
-    return caller.role === 'student' && this.classesService.isMember(caller.id, row.class_id);
+  private canSee(caller: AuthUser, row: Row): boolean {
+    return (
+      caller.role === 'admin' ||
+      row.teacher_id === caller.id ||
+      (caller.role === 'student' && row.is_member)
+    );
   }
 
-  private baseQuery(): string {
+  /**
+   * Assignments with, in the same query, what the status rule needs from the students'
+   * assignment cells (kept by PostgreSQL from the attempts; see the AddAssignmentCells migration):
+   * for a student their own cell; for a teacher or admin the cells of the students on the class
+   * roster grouped by (passed, newest state) with how many students are in each group, and the
+   * roster's size (those without a cell have handed nothing in). $1 is always the caller.
+   */
+  private listQuery(caller: AuthUser): string {
+    const forStudent = caller.role === 'student';
+    const standing = forStudent
+      ? `x.passed, x.latest_state, NULL::json AS groups, NULL::int AS roster`
+      : `NULL::boolean AS passed, NULL::attempt_state AS latest_state,
+         (SELECT json_agg(json_build_array(g.passed, g.latest_state, g.n))
+            FROM (SELECT x.passed, x.latest_state, count(*)::int AS n
+                    FROM assignment_cells x JOIN class_members m ON m.class_id = a.class_id AND m.student_id = x.student_id
+                   WHERE x.assignment_id = a.id
+                   GROUP BY x.passed, x.latest_state) g) AS groups,
+         (SELECT count(*)::int FROM class_members m WHERE m.class_id = a.class_id) AS roster`;
     return `SELECT a.id, a.class_id, c.name AS class_name, c.teacher_id, a.drill_id, d.title AS drill_title,
-                   d.kind AS drill_kind, a.due_at, a.note, a.created_at
+                   d.kind AS drill_kind, a.due_at, a.note, a.created_at,
+                   EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = a.class_id AND m.student_id = $1) AS is_member,
+                   ${standing}
               FROM assignments a
               JOIN classes c ON c.id = a.class_id
-              JOIN drills d ON d.id = a.drill_id`;
+              JOIN drills d ON d.id = a.drill_id
+              ${forStudent ? 'LEFT JOIN assignment_cells x ON x.assignment_id = a.id AND x.student_id = $1' : ''}`;
   }
 
-  /** One query for all the attempts behind the statuses shown. */
-  private async withStatus(caller: AuthUser, rows: Row[]): Promise<AssignmentView[]> {
-    if (rows.length === 0) return [];
-    const ids = rows.map((r) => r.id);
-    const forStudent = caller.role === 'student';
-    // One row per student and assignment, reduced by PostgreSQL to what the status rule needs.
-    const cells = await this.dataSource.query<{ assignment_id: string; student_id: string; passed: boolean; latest_state: AttemptSummary['latestState'] }[]>(
-      `SELECT assignment_id, student_id,
-              bool_or(state = 'graded' AND COALESCE(override_pass, pass)) IS TRUE AS passed,
-              (array_agg(state ORDER BY created_at DESC))[1] AS latest_state
-         FROM attempts WHERE assignment_id = ANY($1) ${forStudent ? 'AND student_id = $2' : ''}
-        GROUP BY assignment_id, student_id`,
-      forStudent ? [ids, caller.id] : [ids],
-    );
-    const rosters = forStudent
-      ? new Map<string, string[]>()
-      : new Map(
-          (
-            await this.dataSource.query<{ class_id: string; students: string[] }[]>(
-              `SELECT class_id, array_agg(student_id) AS students FROM class_members WHERE class_id = ANY($1) GROUP BY class_id`,
-              [[...new Set(rows.map((r) => r.class_id))]],
-            )
-          ).map((r) => [r.class_id, r.students]),
-        );
-    const byCell = new Map(cells.map((c) => [`${c.assignment_id}/${c.student_id}`, { passed: c.passed, latestState: c.latest_state }]));
-    return rows.map((row) => {
-      const view: AssignmentView = {
-        id: row.id,
-        classId: row.class_id,
-        className: row.class_name,
-        drill: { id: row.drill_id, title: row.drill_title, kind: row.drill_kind },
-        dueAt: row.due_at,
-        note: row.note,
-        createdAt: row.created_at,
+  private toView(caller: AuthUser, row: Row): AssignmentView {
+    const view: AssignmentView = {
+      id: row.id,
+      classId: row.class_id,
+      className: row.class_name,
+      drill: { id: row.drill_id, title: row.drill_title, kind: row.drill_kind },
+      dueAt: row.due_at,
+      note: row.note,
+      createdAt: row.created_at,
+    };
+    if (caller.role === 'student') {
+      view.status = statusFromSummary(
+        row.latest_state === null
+          ? undefined
+          : { passed: row.passed!, latestState: row.latest_state },
+        row.due_at,
+      );
+    } else {
+      const counts: Record<AssignmentStatus, number> = {
+        'not-started': 0,
+        submitted: 0,
+        'needs-retake': 0,
+        passed: 0,
+        failed: 0,
+        late: 0,
       };
-      const of = (studentId: string) => byCell.get(`${row.id}/${studentId}`);
-      if (forStudent) {
-        view.status = statusFromSummary(of(caller.id), row.due_at);
-      } else {
-        const counts: Record<AssignmentStatus, number> = { 'not-started': 0, submitted: 0, 'needs-retake': 0, passed: 0, failed: 0, late: 0 };
-        for (const studentId of rosters.get(row.class_id) ?? []) counts[statusFromSummary(of(studentId), row.due_at)] += 1;
-        view.counts = counts;
+      let handedIn = 0;
+      for (const [passed, latestState, n] of row.groups ?? []) {
+        counts[statusFromSummary({ passed, latestState }, row.due_at)] += n;
+        handedIn += n;
       }
-      return view;
-    });
+      counts[statusFromSummary(undefined, row.due_at)] += (row.roster ?? 0) - handedIn;
+      view.counts = counts;
+    }
+    return view;
   }
 }

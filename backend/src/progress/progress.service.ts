@@ -2,7 +2,7 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { Mark } from '@mixmark/common';
 import { DataSource } from 'typeorm';
-import { assignmentStatus } from '../assignments/assignment-status';
+import { statusFromSummary, type AttemptSummary } from '../assignments/assignment-status';
 import { ClassesService } from '../classes/classes.service';
 import type { AuthUser } from '../common/decorators/current-user.decorator';
 import type { Gradebook, GradebookCell } from './gradebook';
@@ -19,7 +19,11 @@ interface AttemptRow {
   created_at: Date;
 }
 
-const notFound = () => new NotFoundException({ code: 'not_found', message: 'There is no student with this id in your classes.' });
+const notFound = () =>
+  new NotFoundException({
+    code: 'not_found',
+    message: 'There is no student with this id in your classes.',
+  });
 
 @Injectable()
 export class ProgressService {
@@ -32,7 +36,11 @@ export class ProgressService {
    * A student's progress: their own, or a student of one of the caller's classes.
    * @param now - the day the streak runs up to (today unless a summary of the past asks otherwise)
    */
-  async forStudent(caller: AuthUser, studentId: string, { now }: { now?: Date } = {}): Promise<ProgressSummary & { student: { id: string; displayName: string } }> {
+  async forStudent(
+    caller: AuthUser,
+    studentId: string,
+    { now }: { now?: Date } = {},
+  ): Promise<ProgressSummary & { student: { id: string; displayName: string } }> {
     if (caller.id !== studentId && caller.role !== 'admin') {
       const [teaches] = await this.dataSource.query(
         `SELECT 1 FROM class_members m JOIN classes c ON c.id = m.class_id WHERE m.student_id = $1 AND c.teacher_id = $2 LIMIT 1`,
@@ -40,10 +48,16 @@ export class ProgressService {
       );
       if (!teaches) throw notFound();
     }
-    const [student] = await this.dataSource.query<{ id: string; display_name: string }[]>(`SELECT id, display_name FROM users WHERE id = $1`, [studentId]);
+    const [student] = await this.dataSource.query<{ id: string; display_name: string }[]>(
+      `SELECT id, display_name FROM users WHERE id = $1`,
+      [studentId],
+    );
     if (!student) throw notFound();
     const attempts = await this.attempts('a.student_id = $1', [studentId]);
-    return { ...summariseProgress(attempts.map(this.toProgressAttempt), now), student: { id: student.id, displayName: student.display_name } };
+    return {
+      ...summariseProgress(attempts.map(this.toProgressAttempt), now),
+      student: { id: student.id, displayName: student.display_name },
+    };
   }
 
   /** The class's progress over its assignments. */
@@ -53,57 +67,108 @@ export class ProgressService {
     return summariseProgress(attempts.map(this.toProgressAttempt));
   }
 
-  /** Students × assignments: latest and best (effective) scores and each student's status. */
+  /**
+   * Students × assignments: latest and best (effective) scores and each student's status, from
+   * the assignment cells PostgreSQL keeps from the attempts (one row per student and assignment;
+   * see the AddAssignmentCells migration) and the roster, in one query. PostgreSQL hands the lists
+   * over as JSON text (one parse, no per-field row decoding); the status rule is applied here,
+   * with the clock, because lateness is not stored.
+   */
   async gradebook(teacher: AuthUser, classId: string): Promise<Gradebook> {
-    const klass = await this.classesService.findOwned(teacher, classId);
-    const assignments = await this.dataSource.query<{ id: string; drill_title: string; kind: string; due_at: Date }[]>(
-      `SELECT a.id, d.title AS drill_title, d.kind, a.due_at FROM assignments a JOIN drills d ON d.id = a.drill_id WHERE a.class_id = $1 ORDER BY a.due_at, a.created_at`,
-      [classId],
+    const [book] = await this.dataSource.query<
+      { name: string; assignments: string; students: string; cells: string }[]
+    >(
+      `SELECT c.name,
+              (SELECT COALESCE(json_agg(json_build_array(a.id, d.title, d.kind, floor(extract(epoch FROM a.due_at) * 1000)) ORDER BY a.due_at, a.created_at), '[]')
+                 FROM assignments a JOIN drills d ON d.id = a.drill_id WHERE a.class_id = c.id)::text AS assignments,
+              (SELECT COALESCE(json_agg(json_build_array(u.id, u.display_name, u.email) ORDER BY u.display_name), '[]')
+                 FROM class_members m JOIN users u ON u.id = m.student_id WHERE m.class_id = c.id)::text AS students,
+              (SELECT COALESCE(json_agg(json_build_array(x.student_id, x.assignment_id, x.passed, x.latest_state, x.attempts, x.latest_score, x.best_score, x.latest_attempt_id)), '[]')
+                 FROM assignments a
+                 JOIN assignment_cells x ON x.assignment_id = a.id
+                 JOIN class_members m ON m.class_id = a.class_id AND m.student_id = x.student_id
+                WHERE a.class_id = c.id)::text AS cells
+         FROM classes c
+        WHERE c.id = $1 AND (c.teacher_id = $2 OR $3)`,
+      [classId, teacher.id, teacher.role === 'admin'],
     );
-    const students = await this.dataSource.query<{ id: string; display_name: string; email: string }[]>(
-      `SELECT u.id, u.display_name, u.email FROM class_members m JOIN users u ON u.id = m.student_id WHERE m.class_id = $1 ORDER BY u.display_name`,
-      [classId],
+    if (!book)
+      throw new NotFoundException({
+        code: 'not_found',
+        message: 'There is no class with this id.',
+      });
+    const assignments = (JSON.parse(book.assignments) as [string, string, string, number][]).map(
+      ([id, drillTitle, kind, due]) => ({
+        id,
+        drillTitle,
+        kind,
+        dueAt: new Date(due),
+      }),
     );
-    // The gradebook needs no mark (its JSON is the heavy part of a row): leave it out, and group
-    // the attempts by cell in one pass instead of scanning them all for every cell.
-    const attempts = await this.attempts('s.class_id = $1', [classId], { withMark: false });
-    const byCell = new Map<string, AttemptRow[]>();
-    for (const t of attempts) {
-      const key = `${t.assignment_id}/${t.student_id}`;
-      const list = byCell.get(key) ?? [];
-      if (list.length === 0) byCell.set(key, list);
-      list.push(t);
+    const cellsOf = new Map<string, Map<string, GradebookCell>>();
+    const dueOf = new Map(assignments.map((a) => [a.id, a.dueAt]));
+    type CellRow = [
+      string,
+      string,
+      boolean,
+      AttemptSummary['latestState'],
+      number,
+      number | null,
+      number | null,
+      string | null,
+    ];
+    for (const [
+      studentId,
+      assignmentId,
+      passed,
+      latestState,
+      attempts,
+      latestScore,
+      bestScore,
+      latestAttemptId,
+    ] of JSON.parse(book.cells) as CellRow[]) {
+      let mine = cellsOf.get(studentId);
+      if (!mine) cellsOf.set(studentId, (mine = new Map()));
+      mine.set(assignmentId, {
+        status: statusFromSummary({ passed, latestState }, dueOf.get(assignmentId)!),
+        attempts,
+        latestScore,
+        bestScore,
+        latestAttemptId,
+      });
     }
+    // A student with no attempts for an assignment: the status rule with no summary, one cell per assignment.
+    const empty = new Map(
+      assignments.map((a) => [
+        a.id,
+        {
+          status: statusFromSummary(undefined, a.dueAt),
+          attempts: 0,
+          latestScore: null,
+          bestScore: null,
+          latestAttemptId: null,
+        } satisfies GradebookCell,
+      ]),
+    );
     return {
       classId,
-      className: klass.name,
-      assignments: assignments.map((a) => ({ id: a.id, drillTitle: a.drill_title, kind: a.kind, dueAt: a.due_at })),
-      students: students.map((s) => ({
-        id: s.id,
-        displayName: s.display_name,
-        email: s.email,
-        cells: Object.fromEntries(
-          assignments.map((a) => {
-            const mine = byCell.get(`${a.id}/${s.id}`) ?? []; // newest first
-            const scores = mine.map((t) => t.score).filter((v): v is number => v !== null);
-            const cell: GradebookCell = {
-              status: assignmentStatus(mine.map((t) => ({ state: t.state as never, pass: t.pass, createdAt: t.created_at })), a.due_at),
-              attempts: mine.length,
-              latestScore: mine.find((t) => t.score !== null)?.score ?? null,
-              bestScore: scores.length ? Math.max(...scores) : null,
-              latestAttemptId: mine[0]?.id ?? null,
-            };
-            return [a.id, cell];
-          }),
-        ),
-      })),
+      className: book.name,
+      assignments,
+      students: (JSON.parse(book.students) as [string, string, string][]).map(
+        ([id, displayName, email]) => {
+          const mine = cellsOf.get(id);
+          const cells: Record<string, GradebookCell> = {};
+          for (const a of assignments) cells[a.id] = mine?.get(a.id) ?? { ...empty.get(a.id)! };
+          return { id, displayName, email, cells };
+        },
+      ),
     };
   }
 
   /** Attempts with the effective (override-first) score and pass, newest first. */
-  private attempts(where: string, params: unknown[], { withMark = true } = {}): Promise<AttemptRow[]> {
+  private attempts(where: string, params: unknown[]): Promise<AttemptRow[]> {
     return this.dataSource.query<AttemptRow[]>(
-      `SELECT a.id, a.student_id, a.assignment_id, a.state, ${withMark ? 'a.mark' : 'NULL AS mark'}, a.created_at,
+      `SELECT a.id, a.student_id, a.assignment_id, a.state, a.mark, a.created_at,
               COALESCE(a.override_pass, a.pass) AS pass, COALESCE(a.override_score, a.score) AS score
          FROM attempts a LEFT JOIN assignments s ON s.id = a.assignment_id
         WHERE ${where} ORDER BY a.created_at DESC`,
@@ -111,5 +176,10 @@ export class ProgressService {
     );
   }
 
-  private toProgressAttempt = (row: AttemptRow) => ({ createdAt: row.created_at, state: row.state, pass: row.pass, mark: row.mark });
+  private toProgressAttempt = (row: AttemptRow) => ({
+    createdAt: row.created_at,
+    state: row.state,
+    pass: row.pass,
+    mark: row.mark,
+  });
 }

@@ -2,6 +2,7 @@ import { CreateStudiosAndUsers1764633600000 } from './1764633600000-CreateStudio
 import { CreateTeachingDomain1764637200000 } from './1764637200000-CreateTeachingDomain';
 import { AddWeeklyDigestPreference1764723600000 } from './1764723600000-AddWeeklyDigestPreference';
 import { AddAttemptOverlayPlan1764810000000 } from './1764810000000-AddAttemptOverlayPlan';
+import { AddAssignmentCells1764892800000 } from './1764892800000-AddAssignmentCells';
 
 /** Every migration, oldest first. Listed by hand so no glob or folder path is needed at run time. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   CreateTeachingDomain1764637200000,
   AddWeeklyDigestPreference1764723600000,
   AddAttemptOverlayPlan1764810000000,
+  AddAssignmentCells1764892800000,
 ];
