@@ -147,7 +147,13 @@ export async function decodePhoto(
       .raw()
       .toBuffer({ resolveWithObject: true });
     return {
-      raster: { data, width: info.width, height: info.height, channels: 3 },
+      // A plain Uint8Array view of sharp's Buffer: V8 reads it faster in the pixel loops.
+      raster: {
+        data: new Uint8Array(data.buffer, data.byteOffset, data.length),
+        width: info.width,
+        height: info.height,
+        channels: 3,
+      },
       scale: info.width / width,
       width,
       height,

@@ -182,7 +182,10 @@ function firstMarker(raster: Raster8): {
   const tried: QrCandidate[] = [];
   const groups: QrCandidate[] = [];
   for (const reduce of Math.max(width, height) > 1100 ? [2, 1] : [1]) {
-    const finders = findFinderPatterns(greyReduced(raster, reduce));
+    // Every other row on the half-size copy (a finder is at least 7 modules of 1.5 px there,
+    // so it still crosses several rows scanned); every row at working size, where the
+    // smallest cards are looked for.
+    const finders = findFinderPatterns(greyReduced(raster, reduce), reduce === 2 ? 2 : 1);
     const candidates = groupQrCandidates(finders, reduce, width, height);
     groups.push(...candidates);
     for (const c of candidates) {

@@ -16,68 +16,68 @@ export type QrCandidate = {
   y1: number;
 };
 
+/** A grey copy for the finder scan with its local threshold: a pixel is dark when it is
+ * under `limit` of its 8 × 8 block. */
+export type FinderImage = {
+  data: Uint8Array;
+  width: number;
+  height: number;
+  /** Blocks across. */
+  bw: number;
+  /** Per 8 × 8 block: 90 % of the mean of the 5 × 5 blocks around it. */
+  limit: Float64Array;
+};
+
 /**
- * The green channel of an RGB raster, reduced by an integer factor (box average), for the
- * finder scan. Green alone carries most of the luminance and the black-on-white print has
- * the same contrast in every channel under any cast; reading one byte of three makes this
- * copy about twice as fast as a weighted grey.
+ * The green channel of an RGB raster, reduced by an integer factor (box average), with the
+ * dark/light threshold of every 8 × 8 block of it, in one pass over the raster. Green alone
+ * carries most of the luminance and the black-on-white print has the same contrast in every
+ * channel under any cast; reading one byte of three makes this copy about twice as fast as a
+ * weighted grey. The threshold is 90 % of the mean of the 5 × 5 blocks around a pixel's own
+ * (40 px, wider than a finder pattern at the module sizes scanned): local, so uneven light and
+ * vignetting do not break it.
  */
-export function greyReduced(raster: Raster8, factor: number) {
+export function greyReduced(raster: Raster8, factor: number): FinderImage {
   const width = Math.floor(raster.width / factor);
   const height = Math.floor(raster.height / factor);
   const out = new Uint8Array(width * height);
-  const { data, channels } = raster;
-  const stride = raster.width * channels;
-  if (factor === 1) {
-    for (let k = 0, i = 1; k < out.length; k++, i += channels) out[k] = data[i];
-    return { data: out, width, height };
-  }
-  if (factor === 2) {
-    const c = channels;
-    for (let y = 0; y < height; y++) {
-      let i = 2 * y * stride + 1;
-      let j = i + stride;
-      let k = y * width;
-      for (let x = 0; x < width; x++, i += 2 * c, j += 2 * c, k++)
-        out[k] = (data[i] + data[i + c] + data[j] + data[j + c]) >> 2;
-    }
-    return { data: out, width, height };
-  }
-  const div = factor * factor;
-  for (let y = 0; y < height; y++) {
-    for (let x = 0; x < width; x++) {
-      let sum = 0;
-      for (let dy = 0; dy < factor; dy++) {
-        let i = (y * factor + dy) * stride + x * factor * channels + 1;
-        for (let dx = 0; dx < factor; dx++, i += channels) sum += data[i];
-      }
-      out[y * width + x] = sum / div;
-    }
-  }
-  return { data: out, width, height };
-}
-
-/**
- * Dark/light map of a grey image against the local mean: the image is cut into 8 × 8
- * blocks and a pixel is dark when it is under 90 % of the mean of the 5 × 5 blocks around
- * its own (40 px, wider than a finder pattern at the module sizes scanned). Local, so
- * uneven light and vignetting do not break it; one comparison per pixel.
- */
-function binarise(grey: { data: Uint8Array; width: number; height: number }) {
-  const { data, width, height } = grey;
+  const { data, channels: c } = raster;
+  const stride = raster.width * c;
   const B = 8;
   const bw = Math.ceil(width / B);
   const bh = Math.ceil(height / B);
-  // Block sums (row by row, each block's share of a row summed in a local) and block areas
-  // from the geometry, so the per-pixel loops hold no counters.
   const sums = new Float64Array(bw * bh);
+  const div = factor * factor;
   for (let y = 0; y < height; y++) {
     const row = (y >> 3) * bw;
-    const o = y * width;
+    let k = y * width;
+    let i = y * factor * stride + 1;
     for (let bx = 0; bx < bw; bx++) {
       const end = Math.min(width, (bx + 1) * B);
       let s = 0;
-      for (let x = bx * B; x < end; x++) s += data[o + x];
+      if (factor === 1) {
+        for (let x = bx * B; x < end; x++, i += c) {
+          const v = data[i];
+          out[k++] = v;
+          s += v;
+        }
+      } else if (factor === 2) {
+        for (let x = bx * B; x < end; x++, i += 2 * c) {
+          const j = i + stride;
+          const v = (data[i] + data[i + c] + data[j] + data[j + c]) >> 2;
+          out[k++] = v;
+          s += v;
+        }
+      } else {
+        for (let x = bx * B; x < end; x++, i += factor * c) {
+          let sum = 0;
+          for (let dy = 0; dy < factor; dy++)
+            for (let dx = 0, o = i + dy * stride; dx < factor; dx++, o += c) sum += data[o];
+          const v = (sum / div) | 0;
+          out[k++] = v;
+          s += v;
+        }
+      }
       sums[row + bx] += s;
     }
   }
@@ -97,17 +97,7 @@ function binarise(grey: { data: Uint8Array; width: number; height: number }) {
       limit[by * bw + bx] = (0.9 * s) / n;
     }
   }
-  const dark = new Uint8Array(width * height);
-  for (let y = 0; y < height; y++) {
-    const row = (y >> 3) * bw;
-    const o = y * width;
-    for (let bx = 0; bx < bw; bx++) {
-      const end = o + Math.min(width, (bx + 1) * B);
-      const t = limit[row + bx];
-      for (let k = o + bx * B; k < end; k++) dark[k] = data[k] < t ? 1 : 0;
-    }
-  }
-  return dark;
+  return { data: out, width, height, bw, limit };
 }
 
 /** Whether five run lengths are in the finder pattern's 1:1:3:1:1 ratio (ISO/IEC 18004
@@ -129,20 +119,19 @@ function finderRatio(c: number[]): number {
 /** Runs along a line through (x, y) in direction (dx, dy); returns the finder centre offset
  * along the line and the module size, or undefined when the ratio fails. */
 function crossCheck(
-  dark: Uint8Array,
-  width: number,
-  height: number,
+  img: FinderImage,
   x: number,
   y: number,
   dx: number,
   dy: number,
   maxRun: number,
 ): { offset: number; module: number } | undefined {
+  const { data, width, height, bw, limit } = img;
   const at = (k: number): number => {
     const px = x + k * dx;
     const py = y + k * dy;
     if (px < 0 || py < 0 || px >= width || py >= height) return -1;
-    return dark[py * width + px];
+    return data[py * width + px] < limit[(py >> 3) * bw + (px >> 3)] ? 1 : 0;
   };
   if (at(0) !== 1) return undefined;
   const c = [0, 0, 0, 0, 0];
@@ -186,28 +175,24 @@ function crossCheck(
  * by their 1:1:3:1:1 dark-light run ratio along rows, confirmed across columns and both
  * diagonals (the scan of ISO/IEC 18004 Annex C's reference decoder, as ZXing does it).
  *
- * @param grey - a grey image
+ * @param img - a grey image with its threshold (`greyReduced`)
  * @param step - rows scanned (1 = every row)
  * @returns centres and module sizes, in the grey image's pixels
  */
-export function findFinderPatterns(
-  grey: { data: Uint8Array; width: number; height: number },
-  step = 1,
-): FinderPattern[] {
-  const { width, height } = grey;
-  const dark = binarise(grey);
+export function findFinderPatterns(img: FinderImage, step = 1): FinderPattern[] {
+  const { data, width, height, bw, limit } = img;
   const found: FinderPattern[] = [];
   const maxRun = Math.ceil(Math.min(width, height) / 8);
   const consider = (cx: number, cy: number, mRow: number): void => {
     let x = Math.round(cx);
-    const v = crossCheck(dark, width, height, x, cy, 0, 1, maxRun);
+    const v = crossCheck(img, x, cy, 0, 1, maxRun);
     if (!v || Math.abs(v.module - mRow) > 0.5 * mRow) return;
     const y = Math.round(cy + v.offset);
-    const h = crossCheck(dark, width, height, x, y, 1, 0, maxRun);
+    const h = crossCheck(img, x, y, 1, 0, maxRun);
     if (!h || Math.abs(h.module - v.module) > 0.5 * v.module) return;
     x = Math.round(x + h.offset);
-    const d1 = crossCheck(dark, width, height, x, y, 1, 1, maxRun);
-    const d2 = crossCheck(dark, width, height, x, y, 1, -1, maxRun);
+    const d1 = crossCheck(img, x, y, 1, 1, maxRun);
+    const d2 = crossCheck(img, x, y, 1, -1, maxRun);
     if (!d1 && !d2) return;
     const module = (v.module + h.module) / 2;
     for (const f of found) {
@@ -226,8 +211,9 @@ export function findFinderPatterns(
     c.fill(0);
     let state = 0;
     const row = y * width;
+    const brow = (y >> 3) * bw;
     for (let x = 0; x <= width; x++) {
-      const d = x < width ? dark[row + x] : 0;
+      const d = x < width && data[row + x] < limit[brow + (x >> 3)] ? 1 : 0;
       if (d === 1) {
         if (state % 2 === 1) state++;
         c[state]++;

@@ -12,7 +12,7 @@ import { applyHomography } from './homography';
 import { issue } from './issue-messages';
 import { PhotoFileError, type MeasurementIssue } from './measurement-issue';
 import { readWindow, type WindowReading } from './read-window';
-import { trimmedMean } from './robust-statistics';
+import { kthSmallest, trimmedMeanOfCodes } from './robust-statistics';
 import { insetRect, pixelsPerMm, sampleCardRect, type CardSamples } from './sample-card';
 import { srgb8ToLinearLut } from '@mixmark/common';
 
@@ -90,14 +90,11 @@ const clipped = (s: CardSamples): number => {
 };
 
 function observePatch(samples: CardSamples): [number, number, number] {
-  const n = samples.nx * samples.ny;
-  const out: [number, number, number] = [0, 0, 0];
-  for (let c = 0; c < 3; c++) {
-    const values = new Float64Array(n);
-    for (let k = 0; k < n; k++) values[k] = srgb8ToLinearLut[samples.codes[3 * k + c]];
-    out[c] = trimmedMean(values, 0.1);
-  }
-  return out;
+  return [0, 1, 2].map((c) => trimmedMeanOfCodes(samples.codes, c, 3, srgb8ToLinearLut, 0.1)) as [
+    number,
+    number,
+    number,
+  ];
 }
 
 const centre = (r: MmRect): [number, number] => [r.x + r.w / 2, r.y + r.h / 2];
@@ -297,8 +294,7 @@ function hotShare(samples: CardSamples, correction: ColourCorrection): number {
   const g = correction.tables[1];
   const values = new Float64Array(n);
   for (let k = 0; k < n; k++) values[k] = g[samples.codes[3 * k + 1]];
-  const sorted = Float64Array.from(values).sort();
-  const median = sorted[n >> 1];
+  const median = kthSmallest(values, n >> 1);
   let hot = 0;
   for (let k = 0; k < n; k++) if (values[k] > median * 1.5 + 0.12) hot++;
   return hot / n;
