@@ -56,10 +56,17 @@ async function bench(label: string, width: number, height: number, runs: number)
   const jpeg = await photo(width, height);
   const floors: number[] = [];
   const totals: number[] = [];
-  const shares = { decode: 0, detect: 0, fit: 0, sample: 0 };
+  const stages = {
+    decode: [] as number[],
+    detect: [] as number[],
+    fit: [] as number[],
+    sample: [] as number[],
+  };
   let ok = true;
   const gc = (globalThis as { gc?: () => void }).gc;
-  for (let i = 0; i < runs; i++) {
+  // One untimed run of each first: the code's first call (compiling it) is start-up, which
+  // the two-process figure below includes; this one is a warm service's.
+  for (let i = -1; i < runs; i++) {
     gc?.();
     let factor = 1;
     while (Math.max(width, height) / factor > 2048) factor *= 2;
@@ -71,22 +78,32 @@ async function bench(label: string, width: number, height: number, runs: number)
       })
       .raw()
       .toBuffer();
-    floors.push(performance.now() - t);
+    const floorMs = performance.now() - t;
     t = performance.now();
     const { result, timings } = await measurePhoto(jpeg);
-    totals.push(performance.now() - t);
+    const totalMs = performance.now() - t;
     ok &&= result.ok;
-    for (const key of Object.keys(shares) as (keyof typeof shares)[])
-      shares[key] += timings[key] / runs;
+    if (i < 0) continue;
+    floors.push(floorMs);
+    totals.push(totalMs);
+    for (const key of Object.keys(stages) as (keyof typeof stages)[])
+      stages[key].push(timings[key]);
   }
   const total = median(totals);
   const floor = median(floors);
+  const shares = {
+    decode: median(stages.decode),
+    detect: median(stages.detect),
+    fit: median(stages.fit),
+    sample: median(stages.sample),
+  };
   const sum = shares.decode + shares.detect + shares.fit + shares.sample;
   const pct = (v: number): string => `${Math.round((100 * v) / sum)} %`;
   console.log(
     `${label} (${width}×${height}, ${(jpeg.length / 1e6).toFixed(1)} MB JPEG, measured ${ok ? 'ok' : 'WITH ERRORS'}): ` +
       `median ${total.toFixed(0)} ms end to end; floor (sharp decode + shrink) ${floor.toFixed(0)} ms; ratio ${(total / floor).toFixed(2)}×; ` +
-      `shares: decode ${pct(shares.decode)}, detect ${pct(shares.detect)}, fit ${pct(shares.fit)}, sample ${pct(shares.sample)}`,
+      `shares (stage medians): decode ${pct(shares.decode)}, detect ${pct(shares.detect)}, fit ${pct(shares.fit)}, sample ${pct(shares.sample)} ` +
+      `(${shares.decode.toFixed(0)} / ${shares.detect.toFixed(0)} / ${shares.fit.toFixed(0)} / ${shares.sample.toFixed(0)} ms; one untimed run first)`,
   );
 }
 
