@@ -33,6 +33,7 @@ interface RawAttempt {
   override_score: number | null;
   override_pass: boolean | null;
   created_at: Date;
+  created_us: string;
 }
 
 /** Attempts of these assignments, newest first (created_at, then id: the cells' tie-break), per "assignment/student". */
@@ -41,12 +42,15 @@ export async function attemptsByCell(
   assignmentIds: string[],
 ): Promise<Map<string, RawAttempt[]>> {
   const rows = await db.query<RawAttempt[]>(
-    `SELECT id, student_id, assignment_id, state, score, pass, override_score, override_pass, created_at FROM attempts WHERE assignment_id = ANY($1)`,
+    `SELECT id, student_id, assignment_id, state, score, pass, override_score, override_pass, created_at,
+            (extract(epoch FROM created_at) * 1000000)::bigint::text AS created_us
+       FROM attempts WHERE assignment_id = ANY($1)`,
     [assignmentIds],
   );
-  rows.sort(
-    (x, y) =>
-      y.created_at.getTime() - x.created_at.getTime() || (x.id < y.id ? 1 : x.id > y.id ? -1 : 0),
+  // By the microsecond, as PostgreSQL orders them (a JavaScript Date keeps milliseconds only).
+  const us = (row: RawAttempt) => BigInt(row.created_us);
+  rows.sort((x, y) =>
+    us(x) !== us(y) ? (us(y) > us(x) ? 1 : -1) : x.id < y.id ? 1 : x.id > y.id ? -1 : 0,
   );
   const byCell = new Map<string, RawAttempt[]>();
   for (const row of rows) {
@@ -164,4 +168,46 @@ export function seededRandom(seed: number): () => number {
     t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
     return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
   };
+}
+
+type Group = [boolean | null, AttemptFacts['state'] | null, number];
+const byGroup = (x: Group, y: Group) =>
+  JSON.stringify(x.slice(0, 2)).localeCompare(JSON.stringify(y.slice(0, 2)));
+
+/** The standings PostgreSQL keeps per assignment, groups sorted. */
+export async function storedStandings(
+  db: DataSource,
+  assignmentIds: string[],
+): Promise<Record<string, Group[]>> {
+  const rows = await db.query<{ assignment_id: string; groups: Group[] }[]>(
+    `SELECT assignment_id, groups FROM assignment_standings WHERE assignment_id = ANY($1)`,
+    [assignmentIds],
+  );
+  return Object.fromEntries(rows.map((r) => [r.assignment_id, [...r.groups].sort(byGroup)]));
+}
+
+/** The standings recomputed from the raw attempts and the roster: roster students per (passed, newest state) of their cell. */
+export async function recomputedStandings(
+  db: DataSource,
+  assignmentIds: string[],
+): Promise<Record<string, Group[]>> {
+  const cells = await recomputedCells(db, assignmentIds);
+  const rosters = await db.query<{ id: string; students: string[] | null }[]>(
+    `SELECT a.id, array_remove(array_agg(m.student_id), NULL) AS students
+       FROM assignments a LEFT JOIN class_members m ON m.class_id = a.class_id WHERE a.id = ANY($1) GROUP BY a.id`,
+    [assignmentIds],
+  );
+  return Object.fromEntries(
+    rosters.map(({ id, students }) => {
+      const groups = new Map<string, Group>();
+      for (const student of students ?? []) {
+        const cell = cells.get(`${id}/${student}`);
+        const group: Group = cell ? [cell.passed, cell.latestState, 0] : [null, null, 0];
+        const key = JSON.stringify(group.slice(0, 2));
+        if (!groups.has(key)) groups.set(key, group);
+        groups.get(key)![2] += 1;
+      }
+      return [id, [...groups.values()].sort(byGroup)];
+    }),
+  );
 }

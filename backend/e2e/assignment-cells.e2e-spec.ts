@@ -8,8 +8,10 @@ import {
   expectedCell,
   expectedStatus,
   recomputedCells,
+  recomputedStandings,
   seededRandom,
   storedCells,
+  storedStandings,
 } from './assignment-cells-expected';
 import { createTestApp } from './create-test-app';
 import { registerAccount, type TestAccount } from './helpers';
@@ -37,6 +39,7 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
   let db: DataSource;
   let teacher: TestAccount;
   let students: TestAccount[];
+  let drifter: TestAccount;
   let classId: string;
   let drillId: string;
   let assignments: { id: string; dueAt: Date }[];
@@ -67,6 +70,7 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
       .send({ title: 'Cell grey', kind: 'neutral', targets: [{ lab: { L: 50, a: 0, b: 0 } }] })
       .expect(201);
     drillId = drill.body.id;
+    drifter = await registerAccount(app, 'student', 'Cell drifter');
     assignments = [];
     for (const days of [-3, 2, 9]) {
       const dueAt = new Date(Date.now() + days * dayMs);
@@ -92,6 +96,11 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
     expect({ context, cells: Object.fromEntries(stored) }).toEqual({
       context,
       cells: Object.fromEntries(recomputed),
+    });
+    // The standings (roster students per passed and newest state) for every assignment.
+    expect({ context, standings: await storedStandings(db, ids()) }).toEqual({
+      context,
+      standings: await recomputedStandings(db, ids()),
     });
   }
 
@@ -133,7 +142,9 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
                                   ? 'bulk-delete'
                                   : roll < 0.97
                                     ? 'reattach'
-                                    : 'insert';
+                                    : roll < 0.985
+                                      ? 'join'
+                                      : 'leave';
       counts[op] = (counts[op] ?? 0) + 1;
       const id = live.length ? pick(live) : '';
       switch (op) {
@@ -145,7 +156,7 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
             `INSERT INTO attempts (student_id, drill_id, assignment_id, state, photo_key, photo_bytes, created_at)
              VALUES ($1, $2, $3, 'queued', 'attempts/none/photo.jpg', 1, $4) RETURNING id`,
             [
-              pick(students).id,
+              pick([...students, drifter]).id,
               drillId,
               random() < 0.05 ? null : pick(assignments).id,
               new Date(createdAt),
@@ -222,6 +233,19 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
             [id, pick(assignments).id],
           );
           break;
+        // A student who is on the roster now and then, with attempts either way.
+        case 'join':
+          await db.query(
+            `INSERT INTO class_members (class_id, student_id) VALUES ($1, $2) ON CONFLICT DO NOTHING`,
+            [classId, drifter.id],
+          );
+          break;
+        case 'leave':
+          await db.query(`DELETE FROM class_members WHERE class_id = $1 AND student_id = $2`, [
+            classId,
+            drifter.id,
+          ]);
+          break;
         case 'bulk-delete': {
           const gone = await db.query<{ id: string }[]>(
             `DELETE FROM attempts WHERE student_id = $1 AND assignment_id = $2 RETURNING id`,
@@ -244,6 +268,8 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
         'failed',
         'grade',
         'insert',
+        'join',
+        'leave',
         'measuring',
         'move',
         'needs-retake',
@@ -258,6 +284,11 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
     expect(new Set([...stored.values()].map((c) => c.latestState)).size).toBeGreaterThanOrEqual(3);
 
     // One student leaves the class: their cells stay, the counts and the gradebook leave them out.
+    await db.query(`DELETE FROM class_members WHERE class_id = $1 AND student_id = $2`, [
+      classId,
+      drifter.id,
+    ]);
+    await expectCellsMatchAttempts('after the drifter left');
     const leaver = students[4];
     await request(http)
       .delete(`/api/classes/${classId}/students/${leaver.id}`)
@@ -371,6 +402,46 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
     await expectCellsMatchAttempts('after two concurrent uploads');
   });
 
+  it('should count two students passing one assignment at the same time in its standings', async () => {
+    const made = await request(http)
+      .post('/api/assignments')
+      .set(teacher.auth)
+      .send({ classId, drillId, dueAt: new Date(Date.now() + dayMs).toISOString() })
+      .expect(201);
+    const assignmentId: string = made.body.id;
+    const runners = [db.createQueryRunner(), db.createQueryRunner()];
+    try {
+      for (const runner of runners) {
+        await runner.connect();
+        await runner.startTransaction();
+      }
+      const pass = (i: number) =>
+        runners[i].query(
+          `INSERT INTO attempts (student_id, drill_id, assignment_id, state, photo_key, photo_bytes, score, pass)
+           VALUES ($1, $2, $3, 'graded', 'attempts/none/photo.jpg', 1, 90, true)`,
+          [students[i].id, drillId, assignmentId],
+        );
+      await pass(0);
+      // Different cells, one assignment: the second waits for the first one's lock on the standings.
+      const second = pass(1);
+      await new Promise((resolve) => setTimeout(resolve, 200));
+      await runners[0].commitTransaction();
+      await second;
+      await runners[1].commitTransaction();
+    } finally {
+      for (const runner of runners) await runner.release();
+    }
+    expect(await storedStandings(db, [assignmentId])).toEqual(
+      await recomputedStandings(db, [assignmentId]),
+    );
+    const view = await request(http)
+      .get(`/api/assignments/${assignmentId}`)
+      .set(teacher.auth)
+      .expect(200);
+    expect(view.body.counts).toEqual({ ...noCounts(), passed: 2, 'not-started': 2 });
+    await request(http).delete(`/api/assignments/${assignmentId}`).set(teacher.auth).expect(204);
+  });
+
   it('should drop the cells of a deleted assignment and of a deleted student, with their attempts detached or deleted by the foreign keys', async () => {
     const gone = assignments[2];
     const student = students[1];
@@ -379,7 +450,12 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
        SELECT s, $2, a, 'graded', 'attempts/none/photo.jpg', 1, 70, true FROM unnest($1::uuid[]) s CROSS JOIN unnest($3::uuid[]) a`,
       [students.map((s) => s.id), drillId, ids()],
     );
-    expect((await storedCells(db, [gone.id])).size).toBe(students.length);
+    const [{ withAttempts }] = await db.query<{ withAttempts: number }[]>(
+      `SELECT count(DISTINCT student_id)::int AS "withAttempts" FROM attempts WHERE assignment_id = $1`,
+      [gone.id],
+    );
+    expect(withAttempts).toBeGreaterThanOrEqual(students.length);
+    expect((await storedCells(db, [gone.id])).size).toBe(withAttempts);
     await request(http).delete(`/api/assignments/${gone.id}`).set(teacher.auth).expect(204);
     expect((await storedCells(db, [gone.id])).size).toBe(0);
     const [{ detached }] = await db.query<{ detached: number }[]>(

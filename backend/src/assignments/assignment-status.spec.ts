@@ -4,7 +4,11 @@ import { assignmentStatus, statusFromSummary, type AttemptFacts } from './assign
 const due = new Date('2026-12-10T18:00:00Z');
 const before = new Date('2026-12-09T12:00:00Z');
 const after = new Date('2026-12-11T12:00:00Z');
-const attempt = (state: AttemptFacts['state'], pass: boolean | null = null): AttemptFacts => ({ state, pass, createdAt: before });
+const attempt = (state: AttemptFacts['state'], pass: boolean | null = null): AttemptFacts => ({
+  state,
+  pass,
+  createdAt: before,
+});
 
 describe('assignmentStatus', () => {
   it('should be not started, then late, when nothing was handed in', () => {
@@ -13,11 +17,15 @@ describe('assignmentStatus', () => {
   });
 
   it('should keep a pass from any attempt even when a later one failed', () => {
-    expect(assignmentStatus([attempt('graded', false), attempt('graded', true)], due, after)).toBe('passed');
+    expect(assignmentStatus([attempt('graded', false), attempt('graded', true)], due, after)).toBe(
+      'passed',
+    );
   });
 
   it('should say submitted while the newest photo is still being measured', () => {
-    expect(assignmentStatus([attempt('measuring'), attempt('graded', false)], due, before)).toBe('submitted');
+    expect(assignmentStatus([attempt('measuring'), attempt('graded', false)], due, before)).toBe(
+      'submitted',
+    );
   });
 
   it('should ask for a retake when the newest photo could not be measured', () => {
@@ -30,13 +38,31 @@ describe('assignmentStatus', () => {
   });
 
   it('should give the same status from the summary PostgreSQL reduces the attempts to, for every list of up to three', () => {
-    const states: AttemptFacts['state'][] = ['queued', 'measuring', 'graded', 'needs-retake', 'failed'];
-    const one = states.flatMap((state) => (state === 'graded' ? [attempt(state, true), attempt(state, false), attempt(state, null)] : [attempt(state)]));
+    const states: AttemptFacts['state'][] = [
+      'queued',
+      'measuring',
+      'graded',
+      'needs-retake',
+      'failed',
+    ];
+    const one = states.flatMap((state) =>
+      state === 'graded'
+        ? [attempt(state, true), attempt(state, false), attempt(state, null)]
+        : [attempt(state)],
+    );
     const lists: AttemptFacts[][] = [[]];
-    for (let n = 0; n < 3; n += 1) for (const list of [...lists]) if (list.length === n) for (const a of one) lists.push([...list, a]);
+    for (let n = 0; n < 3; n += 1)
+      for (const list of [...lists])
+        if (list.length === n) for (const a of one) lists.push([...list, a]);
     for (const list of lists) {
-      const summary = list.length ? { passed: list.some((a) => a.state === 'graded' && a.pass === true), latestState: list[0].state } : undefined;
-      for (const now of [before, after]) expect(statusFromSummary(summary, due, now)).toBe(assignmentStatus(list, due, now));
+      const summary = list.length
+        ? {
+            passed: list.some((a) => a.state === 'graded' && a.pass === true),
+            latestState: list[0].state,
+          }
+        : undefined;
+      for (const now of [before, after])
+        expect(statusFromSummary(summary, due, now)).toBe(assignmentStatus(list, due, now));
     }
   });
 });

@@ -1,5 +1,6 @@
 /** Where a student stands on an assignment. */
-export type AssignmentStatus = 'not-started' | 'submitted' | 'needs-retake' | 'passed' | 'failed' | 'late';
+export type AssignmentStatus =
+  'not-started' | 'submitted' | 'needs-retake' | 'passed' | 'failed' | 'late';
 
 export interface AttemptFacts {
   state: 'queued' | 'measuring' | 'graded' | 'needs-retake' | 'failed';
@@ -12,10 +13,17 @@ export interface AttemptFacts {
  * A student's status from their attempts (newest first) and the due date. A pass by any attempt
  * stands; otherwise the newest attempt decides; nothing handed in after the due date is late.
  */
-export function assignmentStatus(attempts: AttemptFacts[], dueAt: Date, now = new Date()): AssignmentStatus {
+export function assignmentStatus(
+  attempts: AttemptFacts[],
+  dueAt: Date,
+  now = new Date(),
+): AssignmentStatus {
   return statusFromSummary(
     attempts.length
-      ? { passed: attempts.some((a) => a.state === 'graded' && a.pass === true), latestState: attempts[0].state }
+      ? {
+          passed: attempts.some((a) => a.state === 'graded' && a.pass === true),
+          latestState: attempts[0].state,
+        }
       : undefined,
     dueAt,
     now,
@@ -32,11 +40,16 @@ export interface AttemptSummary {
  * The same rule from a summary (undefined: no attempts), for lists that let PostgreSQL reduce the
  * attempts to one row per student and assignment.
  */
-export function statusFromSummary(summary: AttemptSummary | undefined, dueAt: Date, now = new Date()): AssignmentStatus {
+export function statusFromSummary(
+  summary: AttemptSummary | undefined,
+  dueAt: Date,
+  now = new Date(),
+): AssignmentStatus {
   if (summary?.passed) return 'passed';
   if (!summary) return now > dueAt ? 'late' : 'not-started';
   const latest = summary.latestState;
   if (latest === 'queued' || latest === 'measuring') return 'submitted';
-  if (latest === 'needs-retake' || latest === 'failed') return now > dueAt ? 'late' : 'needs-retake';
+  if (latest === 'needs-retake' || latest === 'failed')
+    return now > dueAt ? 'late' : 'needs-retake';
   return 'failed';
 }

@@ -1,5 +1,10 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
-import { createAssignmentSchema, updateAssignmentSchema, type CreateAssignmentInput, type UpdateAssignmentInput } from '@mixmark/common';
+import {
+  createAssignmentSchema,
+  updateAssignmentSchema,
+  type CreateAssignmentInput,
+  type UpdateAssignmentInput,
+} from '@mixmark/common';
 import { CurrentUser, type AuthUser } from '../common/decorators/current-user.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { parseId } from '../common/pipes/parse-id.pipe';
@@ -12,18 +17,27 @@ export class AssignmentsController {
 
   @Roles('teacher')
   @Post()
-  create(@CurrentUser() caller: AuthUser, @Body(new SchemaValidationPipe(createAssignmentSchema)) body: CreateAssignmentInput): Promise<AssignmentView> {
+  create(
+    @CurrentUser() caller: AuthUser,
+    @Body(new SchemaValidationPipe(createAssignmentSchema)) body: CreateAssignmentInput,
+  ): Promise<AssignmentView> {
     return this.assignmentsService.create(caller, body);
   }
 
   @Get()
-  findAll(@CurrentUser() caller: AuthUser, @Query('classId') classId?: string): Promise<AssignmentView[]> {
+  findAll(
+    @CurrentUser() caller: AuthUser,
+    @Query('classId') classId?: string,
+  ): Promise<AssignmentView[]> {
     const valid = classId && /^[0-9a-f-]{36}$/i.test(classId) ? classId : undefined;
     return this.assignmentsService.findAll(caller, { classId: valid });
   }
 
   @Get(':id')
-  findOne(@CurrentUser() caller: AuthUser, @Param('id', parseId()) id: string): Promise<AssignmentView> {
+  findOne(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', parseId()) id: string,
+  ): Promise<AssignmentView> {
     return this.assignmentsService.findOne(caller, id);
   }
 

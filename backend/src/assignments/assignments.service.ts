@@ -7,6 +7,7 @@ import type { AuthUser } from '../common/decorators/current-user.decorator';
 import { DrillsService } from '../drills/drills.service';
 import { statusFromSummary, type AssignmentStatus, type AttemptSummary } from './assignment-status';
 import { Assignment } from './entities/assignment.entity';
+import { preparedQuery } from './prepared-query';
 
 export interface AssignmentView {
   id: string;
@@ -36,14 +37,13 @@ interface Row {
   due_at: Date;
   note: string;
   created_at: Date;
-  /** Whether the caller is on the class's roster. */
+  /** Whether a student caller is on the class's roster (false for others). */
   is_member: boolean;
   /** A student caller's own cell (null: nothing handed in). */
   passed: boolean | null;
   latest_state: AttemptSummary['latestState'] | null;
-  /** For a teacher or admin: [passed, newest state, how many roster students] groups, and the roster's size. */
-  groups: [boolean, AttemptSummary['latestState'], number][] | null;
-  roster: number | null;
+  /** For a teacher or admin: [passed, newest state, how many roster students] groups; null state: nothing handed in. */
+  groups: [boolean | null, AttemptSummary['latestState'] | null, number][] | null;
 }
 
 @Injectable()
@@ -74,18 +74,22 @@ export class AssignmentsService {
     caller: AuthUser,
     { classId }: { classId?: string } = {},
   ): Promise<AssignmentView[]> {
-    const params: unknown[] = [caller.id];
+    const role =
+      caller.role === 'student' ? 'student' : caller.role === 'admin' ? 'admin' : 'teacher';
     let where =
-      caller.role === 'admin'
+      role === 'admin'
         ? 'TRUE'
-        : caller.role === 'teacher'
+        : role === 'teacher'
           ? 'c.teacher_id = $1'
-          : 'EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = c.id AND m.student_id = $1)';
+          : 'EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = a.class_id AND m.student_id = $1)';
+    const params: unknown[] = [caller.id];
     if (classId) {
       params.push(classId);
-      where += ` AND a.class_id = $${params.length}`;
+      where += ' AND a.class_id = $2';
     }
-    const rows = await this.dataSource.query<Row[]>(
+    const rows = await preparedQuery<Row>(
+      this.dataSource,
+      `assignments-list-${role}${classId ? '-class' : ''}`,
       `${this.listQuery(caller)} WHERE ${where} ORDER BY a.due_at ASC`,
       params,
     );
@@ -93,10 +97,13 @@ export class AssignmentsService {
   }
 
   async findOne(caller: AuthUser, id: string): Promise<AssignmentView> {
-    const [row] = await this.dataSource.query<Row[]>(`${this.listQuery(caller)} WHERE a.id = $2`, [
-      caller.id,
-      id,
-    ]);
+    const forStudent = caller.role === 'student';
+    const [row] = await preparedQuery<Row>(
+      this.dataSource,
+      `assignments-one-${forStudent ? 'student' : 'teacher'}`,
+      `${this.listQuery(caller)} WHERE a.id = $2`,
+      [caller.id, id],
+    );
     if (!row || !this.canSee(caller, row)) throw notFound();
     return this.toView(caller, row);
   }
@@ -144,31 +151,25 @@ export class AssignmentsService {
   }
 
   /**
-   * Assignments with, in the same query, what the status rule needs from the students'
-   * assignment cells (kept by PostgreSQL from the attempts; see the AddAssignmentCells migration):
-   * for a student their own cell; for a teacher or admin the cells of the students on the class
-   * roster grouped by (passed, newest state) with how many students are in each group, and the
-   * roster's size (those without a cell have handed nothing in). $1 is always the caller.
+   * Assignments with, in the same query, what the status rule needs, kept by PostgreSQL from the
+   * attempts (see the AddAssignmentCells and AddAssignmentStandings migrations): for a student
+   * their own assignment cell; for a teacher or admin the assignment's standings, how many roster
+   * students are in each (passed, newest state) group. $1 is always the caller.
    */
   private listQuery(caller: AuthUser): string {
     const forStudent = caller.role === 'student';
-    const standing = forStudent
-      ? `x.passed, x.latest_state, NULL::json AS groups, NULL::int AS roster`
-      : `NULL::boolean AS passed, NULL::attempt_state AS latest_state,
-         (SELECT json_agg(json_build_array(g.passed, g.latest_state, g.n))
-            FROM (SELECT x.passed, x.latest_state, count(*)::int AS n
-                    FROM assignment_cells x JOIN class_members m ON m.class_id = a.class_id AND m.student_id = x.student_id
-                   WHERE x.assignment_id = a.id
-                   GROUP BY x.passed, x.latest_state) g) AS groups,
-         (SELECT count(*)::int FROM class_members m WHERE m.class_id = a.class_id) AS roster`;
     return `SELECT a.id, a.class_id, c.name AS class_name, c.teacher_id, a.drill_id, d.title AS drill_title,
                    d.kind AS drill_kind, a.due_at, a.note, a.created_at,
-                   EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = a.class_id AND m.student_id = $1) AS is_member,
-                   ${standing}
+                   ${
+                     forStudent
+                       ? `EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = a.class_id AND m.student_id = $1) AS is_member,
+                          x.passed, x.latest_state, NULL::jsonb AS groups`
+                       : `$1::uuid IS NULL AS is_member, NULL::boolean AS passed, NULL::attempt_state AS latest_state, st.groups`
+                   }
               FROM assignments a
               JOIN classes c ON c.id = a.class_id
               JOIN drills d ON d.id = a.drill_id
-              ${forStudent ? 'LEFT JOIN assignment_cells x ON x.assignment_id = a.id AND x.student_id = $1' : ''}`;
+              ${forStudent ? 'LEFT JOIN assignment_cells x ON x.assignment_id = a.id AND x.student_id = $1' : 'LEFT JOIN assignment_standings st ON st.assignment_id = a.id'}`;
   }
 
   private toView(caller: AuthUser, row: Row): AssignmentView {
@@ -197,12 +198,15 @@ export class AssignmentsService {
         failed: 0,
         late: 0,
       };
-      let handedIn = 0;
-      for (const [passed, latestState, n] of row.groups ?? []) {
-        counts[statusFromSummary({ passed, latestState }, row.due_at)] += n;
-        handedIn += n;
+      // A group with no newest state: roster students who have handed nothing in.
+      for (const [passed, latestState, students] of row.groups ?? []) {
+        counts[
+          statusFromSummary(
+            latestState === null ? undefined : { passed: passed!, latestState },
+            row.due_at,
+          )
+        ] += students;
       }
-      counts[statusFromSummary(undefined, row.due_at)] += (row.roster ?? 0) - handedIn;
       view.counts = counts;
     }
     return view;

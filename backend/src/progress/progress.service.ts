@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { Mark } from '@mixmark/common';
 import { DataSource } from 'typeorm';
 import { statusFromSummary, type AttemptSummary } from '../assignments/assignment-status';
+import { preparedQuery } from '../assignments/prepared-query';
 import { ClassesService } from '../classes/classes.service';
 import type { AuthUser } from '../common/decorators/current-user.decorator';
 import type { Gradebook, GradebookCell } from './gradebook';
@@ -75,19 +76,23 @@ export class ProgressService {
    * with the clock, because lateness is not stored.
    */
   async gradebook(teacher: AuthUser, classId: string): Promise<Gradebook> {
-    const [book] = await this.dataSource.query<
-      { name: string; assignments: string; students: string; cells: string }[]
-    >(
+    const [book] = await preparedQuery<{
+      name: string;
+      assignments: string;
+      students: string;
+      cells: string;
+    }>(
+      this.dataSource,
+      'gradebook',
       `SELECT c.name,
               (SELECT COALESCE(json_agg(json_build_array(a.id, d.title, d.kind, floor(extract(epoch FROM a.due_at) * 1000)) ORDER BY a.due_at, a.created_at), '[]')
                  FROM assignments a JOIN drills d ON d.id = a.drill_id WHERE a.class_id = c.id)::text AS assignments,
               (SELECT COALESCE(json_agg(json_build_array(u.id, u.display_name, u.email) ORDER BY u.display_name), '[]')
                  FROM class_members m JOIN users u ON u.id = m.student_id WHERE m.class_id = c.id)::text AS students,
+              -- Cells of students who have left the class come too; only the roster's are shown.
               (SELECT COALESCE(json_agg(json_build_array(x.student_id, x.assignment_id, x.passed, x.latest_state, x.attempts, x.latest_score, x.best_score, x.latest_attempt_id)), '[]')
-                 FROM assignments a
-                 JOIN assignment_cells x ON x.assignment_id = a.id
-                 JOIN class_members m ON m.class_id = a.class_id AND m.student_id = x.student_id
-                WHERE a.class_id = c.id)::text AS cells
+                 FROM assignment_cells x
+                WHERE x.assignment_id IN (SELECT a.id FROM assignments a WHERE a.class_id = c.id))::text AS cells
          FROM classes c
         WHERE c.id = $1 AND (c.teacher_id = $2 OR $3)`,
       [classId, teacher.id, teacher.role === 'admin'],

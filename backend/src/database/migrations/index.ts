@@ -3,6 +3,7 @@ import { CreateTeachingDomain1764637200000 } from './1764637200000-CreateTeachin
 import { AddWeeklyDigestPreference1764723600000 } from './1764723600000-AddWeeklyDigestPreference';
 import { AddAttemptOverlayPlan1764810000000 } from './1764810000000-AddAttemptOverlayPlan';
 import { AddAssignmentCells1764892800000 } from './1764892800000-AddAssignmentCells';
+import { AddAssignmentStandings1764896400000 } from './1764896400000-AddAssignmentStandings';
 
 /** Every migration, oldest first. Listed by hand so no glob or folder path is needed at run time. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   AddWeeklyDigestPreference1764723600000,
   AddAttemptOverlayPlan1764810000000,
   AddAssignmentCells1764892800000,
+  AddAssignmentStandings1764896400000,
 ];
