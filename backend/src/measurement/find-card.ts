@@ -177,6 +177,8 @@ function firstMarker(raster: Raster8): {
   candidates: QrCandidate[];
   /** Every group the scan saw, at every scale scanned. */
   groups: QrCandidate[];
+  /** Whether the working-size copy was scanned too. */
+  full: boolean;
 } {
   const { width, height } = raster;
   const tried: QrCandidate[] = [];
@@ -208,7 +210,8 @@ function firstMarker(raster: Raster8): {
         c.module >= 6 && factorFor(c.module) < 2 ? [2, factorFor(c.module)] : [factorFor(c.module)];
       for (const factor of factors) {
         const read = readMarker(raster, c.x0, c.y0, c.x1 - c.x0, c.y1 - c.y0, factor);
-        if (read) return { read, precise: factor <= 1, candidates: tried, groups };
+        if (read)
+          return { read, precise: factor <= 1, candidates: tried, groups, full: reduce === 1 };
       }
     }
   }
@@ -229,11 +232,11 @@ function firstMarker(raster: Raster8): {
           th,
           factor,
         );
-        if (read) return { read, precise: factor === 1, candidates: tried, groups };
+        if (read) return { read, precise: factor === 1, candidates: tried, groups, full: true };
       }
     }
   }
-  return { precise: false, candidates: tried, groups };
+  return { precise: false, candidates: tried, groups, full: true };
 }
 
 const overlap = (a: { x0: number; y0: number; x1: number; y1: number }, b: typeof a): number =>
@@ -466,6 +469,28 @@ export function findCard(raster: Raster8): CardDetection | undefined {
       readMarker(raster, x0, y0, x1 - x0, y1 - y0, 0.5);
     if (read && matches(read)) {
       addHit(read);
+      fit = fitAll([...hits.values()]) ?? fit;
+    }
+  }
+  // A first marker read from the half-size scan leaves the others to that scan's symbols;
+  // where their modules are under about 2.5 px there, some finders are lost. Then the
+  // working-size copy is scanned for the markers still missing (cards small in the frame).
+  if (hits.size < layout.markers.length && !found.full) {
+    const finders = findFinderPatterns(greyReduced(raster, 1), 1);
+    const more = groupQrCandidates(finders, 1, width, height)
+      .map(orientSymbol)
+      .filter((s) => s !== undefined);
+    for (const corner of order) {
+      if (hits.has(corner)) continue;
+      const marker = layout.markers[corner];
+      const image = symbolAt(raster, more, fit.h, layout, marker);
+      if (!image) continue;
+      hits.set(corner, {
+        payload: { ...payload, corner: corner as CardPayload['corner'] },
+        card: toCard(marker, finderModules),
+        image,
+        weights: [1, 1, 1],
+      });
       fit = fitAll([...hits.values()]) ?? fit;
     }
   }

@@ -58,11 +58,11 @@ describe('measurement accuracy on synthetic photos', () => {
     return { median, p95 };
   };
 
-  // Scene 20 (a small ~1 MP card at −1.2 EV) reads only one corner code of a v2 card; the v1
-  // card's codes in the same pose all read. That is the finder's to fix (find-card.ts), not
-  // a colour reading; this allows that one miss and no other.
-  it('finds the card in all but at most one scene', () => {
-    expect(missed.length).toBeLessThanOrEqual(1);
+  // Every scene's card is found with all four corner codes (scene 20, a small ~1 MP card at
+  // −1.2 EV whose other codes the half-size finder scan half-missed, reads since the
+  // working-size scan is run for the codes still missing).
+  it('finds the card in every scene', () => {
+    expect(missed).toEqual([]);
   });
 
   it('meets median ΔE00 ≤ 1.0 over the suite (issue 4)', () => {
@@ -70,11 +70,13 @@ describe('measurement accuracy on synthetic photos', () => {
     expect(summary().median).toBeLessThanOrEqual(1.0);
   });
 
-  // Known gap: issue 4 asks for a 95th percentile ≤ 2.0; over these 64 scenes (183 readings,
-  // card layout v2 with the smoothing tone curve) it reads 2.02 (v1's nine-step ramp: 2.18).
-  // What is left is JPEG's rounding of flat areas, mostly in the windows, which the card cannot
-  // average (quality 100 reads p95 0.73; see docs/measurement.md). This guards what is reached
-  // so that it cannot get worse unnoticed.
+  // Known gap: issue 4 asks for a 95th percentile ≤ 2.0; over these 64 scenes (184 readings,
+  // card layout v2) it reads 2.02, and 2.22 / 1.99 on seed sets 2000 / 3000
+  // (testing/accuracy-seeds.ts). What is left is JPEG's rounding of flat colour, and the
+  // window's own share alone (the card's patches read from a quality-100 copy of the same
+  // scene) already reads p95 1.89 here and 2.10 on set 2000, so no change to the correction
+  // can meet 2.0 on both (see docs/measurement.md). This guards what is reached so that it
+  // cannot get worse unnoticed.
   it('keeps the 95th percentile ΔE00 at or under 2.1 (issue 4 target 2.0 not yet met)', () => {
     expect(quantile(errors, 0.95)).toBeLessThanOrEqual(2.1);
   });

@@ -19,6 +19,8 @@ async function render(folder: string, seedBase: number): Promise<void> {
   await mkdir(folder, { recursive: true });
   for (let i = 0; i < accuracySceneCount; i++) {
     const options = accuracyScene(i, accuracySceneSize(i), seedBase);
+    // A quality override draws the same scene saved at another JPEG quality (for diagnosis).
+    if (process.env.SCENE_QUALITY) options.jpegQuality = Number(process.env.SCENE_QUALITY);
     const { jpeg, truth } = await renderScene(options);
     const name = String(i).padStart(2, '0');
     await writeFile(join(folder, `${name}.jpg`), jpeg);
