@@ -331,6 +331,12 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
       .set(teacher.auth)
       .expect(200);
     expect(list.body.map((a: { id: string }) => a.id)).toEqual(ids());
+    // Dates as JSON: the same ISO text a Date gives.
+    expect(list.body.map((a: { dueAt: string }) => a.dueAt)).toEqual(
+      assignments.map((a) => a.dueAt.toISOString()),
+    );
+    for (const a of list.body as { createdAt: string }[])
+      expect(new Date(a.createdAt).toISOString()).toBe(a.createdAt);
     for (const view of list.body as { id: string; counts: Record<AssignmentStatus, number> }[]) {
       const a = assignments.find((x) => x.id === view.id)!;
       const counts = noCounts();

@@ -7,6 +7,7 @@ import type { AuthUser } from '../common/decorators/current-user.decorator';
 import { DrillsService } from '../drills/drills.service';
 import { statusFromSummary, type AssignmentStatus, type AttemptSummary } from './assignment-status';
 import { Assignment } from './entities/assignment.entity';
+import { isoDateColumns, IsoDate } from './iso-date';
 import { preparedQuery } from './prepared-query';
 
 export interface AssignmentView {
@@ -34,9 +35,11 @@ interface Row {
   drill_id: string;
   drill_title: string;
   drill_kind: string;
-  due_at: Date;
+  due_at_ms: number;
+  due_at_iso: string;
   note: string;
-  created_at: Date;
+  created_at_ms: number;
+  created_at_iso: string;
   /** Whether a student caller is on the class's roster (false for others). */
   is_member: boolean;
   /** A student caller's own cell (null: nothing handed in). */
@@ -159,7 +162,8 @@ export class AssignmentsService {
   private listQuery(caller: AuthUser): string {
     const forStudent = caller.role === 'student';
     return `SELECT a.id, a.class_id, c.name AS class_name, c.teacher_id, a.drill_id, d.title AS drill_title,
-                   d.kind AS drill_kind, a.due_at, a.note, a.created_at,
+                   d.kind AS drill_kind, a.note,
+                   ${isoDateColumns('a.due_at', 'due_at')}, ${isoDateColumns('a.created_at', 'created_at')},
                    ${
                      forStudent
                        ? `EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = a.class_id AND m.student_id = $1) AS is_member,
@@ -173,21 +177,22 @@ export class AssignmentsService {
   }
 
   private toView(caller: AuthUser, row: Row): AssignmentView {
+    const dueAt = new IsoDate(row.due_at_ms, row.due_at_iso);
     const view: AssignmentView = {
       id: row.id,
       classId: row.class_id,
       className: row.class_name,
       drill: { id: row.drill_id, title: row.drill_title, kind: row.drill_kind },
-      dueAt: row.due_at,
+      dueAt,
       note: row.note,
-      createdAt: row.created_at,
+      createdAt: new IsoDate(row.created_at_ms, row.created_at_iso),
     };
     if (caller.role === 'student') {
       view.status = statusFromSummary(
         row.latest_state === null
           ? undefined
           : { passed: row.passed!, latestState: row.latest_state },
-        row.due_at,
+        dueAt,
       );
     } else {
       const counts: Record<AssignmentStatus, number> = {
@@ -203,7 +208,7 @@ export class AssignmentsService {
         counts[
           statusFromSummary(
             latestState === null ? undefined : { passed: passed!, latestState },
-            row.due_at,
+            dueAt,
           )
         ] += students;
       }
