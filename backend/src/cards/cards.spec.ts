@@ -91,6 +91,14 @@ describe('buildCardLayout', () => {
 });
 
 describe('renderCardPng', () => {
+  it.each([600, 1200])('draws the card at %i dpi, true size, where it once exceeded the pixel limit', async (dpi) => {
+    const layout = buildCardLayout({ kind: 'graded-wash' });
+    const { png, layout: px } = await renderCardPng(layout, dpi);
+    const info = await sharp(png).metadata();
+    expect([info.width, info.height]).toEqual([Math.round((layout.width / 25.4) * dpi), Math.round((layout.height / 25.4) * dpi)]);
+    expect([px.width, px.height]).toEqual([info.width, info.height]);
+  });
+
   it('makes the windows fully transparent and the markers readable', async () => {
     const layout = buildCardLayout({ kind: 'temperature-pair' });
     const { png, layout: px } = await renderCardPng(layout, 150);

@@ -57,7 +57,15 @@ export async function renderCardPng(
   }
   const width = Math.round((layout.width * dpi) / 25.4);
   const height = Math.round((layout.height * dpi) / 25.4);
-  const { data, info } = await sharp(Buffer.from(renderCardSvg(layout)), { density: dpi })
+  // The SVG is sized in mm; librsvg converts mm at the given density and sharp then scales by
+  // density / 72 again, so at 300 dpi it drew 4.2 times too large (60 MP, resized down) and from
+  // about 450 dpi it exceeded the pixel limit. Sized in pixels at 72 dpi it draws the card
+  // exactly once at the size asked for.
+  const svg = renderCardSvg(layout).replace(
+    `width="${layout.width}mm" height="${layout.height}mm"`,
+    `width="${width}" height="${height}"`,
+  );
+  const { data, info } = await sharp(Buffer.from(svg), { density: 72 })
     .resize(width, height, { fit: 'fill' })
     .ensureAlpha()
     .raw()

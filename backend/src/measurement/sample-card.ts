@@ -49,8 +49,12 @@ export function sampleCardRect(
   maxPerSide = 160,
 ): CardSamples {
   const ppm = pixelsPerMm(h, rect.x + rect.w / 2, rect.y + rect.h / 2);
-  const nx = Math.max(2, Math.min(maxPerSide, Math.round(rect.w * ppm)));
-  const ny = Math.max(2, Math.min(maxPerSide, Math.round(rect.h * ppm)));
+  // One scale for both sides, so the grid keeps the rectangle's shape when the limit bites (a
+  // 110 × 24 mm wash window on a large photo is 160 × 35 samples, not 160 × 160, and still
+  // reads as a long window with an L* profile).
+  const fit = Math.min(1, maxPerSide / (Math.max(rect.w, rect.h) * ppm));
+  const nx = Math.max(2, Math.min(maxPerSide, Math.round(rect.w * ppm * fit)));
+  const ny = Math.max(2, Math.min(maxPerSide, Math.round(rect.h * ppm * fit)));
   const codes = new Uint8Array(nx * ny * 3);
   const { data, width, height, channels } = raster;
   let outside = 0;
