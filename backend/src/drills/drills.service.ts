@@ -1,4 +1,4 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { CreateDrillInput } from '@mixmark/common';
 import { Brackets, DataSource, Repository } from 'typeorm';
@@ -40,10 +40,38 @@ export class DrillsService {
     return drill;
   }
 
+  /**
+   * Replaces the drill's description. Once the drill has an assignment or an attempt, its kind
+   * and its number of targets are fixed: they decide the printed card's layout (one window per
+   * target) and what every past mark measured, so changing them is refused (409 `drill_in_use`)
+   * and the teacher is pointed to a copy. Title, instructions, tolerance, palette, visibility
+   * and the target colours themselves (same count) may still change.
+   */
   async update(owner: AuthUser, id: string, input: CreateDrillInput): Promise<Drill> {
     const drill = await this.findOwned(owner, id);
+    const changed: Record<string, string> = {};
+    if (input.kind !== drill.kind) changed.kind = 'drill_in_use';
+    if (input.targets.length !== drill.targets.length) changed.targets = 'drill_in_use';
+    if (Object.keys(changed).length > 0 && (await this.isInUse(id))) {
+      throw new ConflictException({
+        code: 'drill_in_use',
+        message:
+          'This drill has already been assigned or attempted, so its kind and number of targets can no longer change: ' +
+          'printed cards and past marks depend on them. Duplicate the drill and change the copy instead.',
+        details: changed,
+      });
+    }
     Object.assign(drill, this.fields(input));
     return this.drillsRepository.save(drill);
+  }
+
+  /** True when any assignment or any attempt (whatever its state) points at the drill. */
+  private async isInUse(id: string): Promise<boolean> {
+    const [row] = await this.dataSource.query<{ used: boolean }[]>(
+      `SELECT EXISTS (SELECT 1 FROM assignments WHERE drill_id = $1) OR EXISTS (SELECT 1 FROM attempts WHERE drill_id = $1) AS used`,
+      [id],
+    );
+    return row.used;
   }
 
   /** A private copy in the caller's own library, to adapt. */
