@@ -13,6 +13,7 @@ import { issue } from './issue-messages';
 import { PhotoFileError, type MeasurementIssue } from './measurement-issue';
 import { readWindow, type WindowReading } from './read-window';
 import { kthSmallest, trimmedMeanOfCodes } from './robust-statistics';
+import { scratchF64 } from './scratch';
 import { insetRect, pixelsPerMm, sampleCardRect, type CardSamples } from './sample-card';
 import { srgb8ToLinearLut } from '@mixmark/common';
 
@@ -292,7 +293,7 @@ export function measureDecoded(
 function hotShare(samples: CardSamples, correction: ColourCorrection): number {
   const n = samples.nx * samples.ny;
   const g = correction.tables[1];
-  const values = new Float64Array(n);
+  const values = scratchF64('hot', n);
   for (let k = 0; k < n; k++) values[k] = g[samples.codes[3 * k + 1]];
   const median = kthSmallest(values, n >> 1);
   let hot = 0;

@@ -12,6 +12,7 @@ import {
 } from '@mixmark/common';
 import { lightAt, type ColourCorrection } from './colour-correction';
 import { quantile, quantiles } from './robust-statistics';
+import { scratchF64 } from './scratch';
 import type { CardSamples } from './sample-card';
 
 /** A window's reading as the measurement reports it. */
@@ -29,12 +30,13 @@ export type WindowReading = {
   pixels: number;
 };
 
-/** Per-sample corrected linear RGB (reflectance) and luminance. */
+/** Per-sample corrected linear RGB (reflectance) and luminance, in scratch arrays that the
+ * next call reuses. */
 export function correctSamples(samples: CardSamples, correction: ColourCorrection) {
   const { nx, ny, rect, codes } = samples;
   const n = nx * ny;
-  const rgb = new Float64Array(n * 3);
-  const Y = new Float64Array(n);
+  const rgb = scratchF64('window-rgb', n * 3);
+  const Y = scratchF64('window-Y', n);
   const [tr, tg, tb] = correction.tables;
   const [lr, lg, lb] = correction.light;
   const sx = rect.w / nx;

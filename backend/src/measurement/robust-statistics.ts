@@ -1,3 +1,5 @@
+import { scratchF64 } from './scratch';
+
 /**
  * Mean of the values between the `trim` and `1 − trim` quantiles (a trimmed mean, Tukey's
  * robust location estimate): paper grain, pigment granulation and a stray hair move it
@@ -94,7 +96,8 @@ function swap(a: Float64Array, i: number, j: number): void {
 export function quantiles(values: ArrayLike<number>, qs: number[]): number[] {
   const n = values.length;
   if (n === 0) return qs.map(() => NaN);
-  const a = Float64Array.from(values);
+  const a = scratchF64('select', n);
+  for (let k = 0; k < n; k++) a[k] = values[k];
   return qs.map((q) => {
     const pos = q * (n - 1);
     const i = Math.floor(pos);
@@ -115,7 +118,8 @@ export function quantile(values: ArrayLike<number>, q: number): number {
 
 /** The k-th smallest (0-based) of values, by selection (the values are not modified). */
 export function kthSmallest(values: ArrayLike<number>, k: number): number {
-  const a = Float64Array.from(values);
+  const a = scratchF64('select', values.length);
+  for (let i = 0; i < values.length; i++) a[i] = values[i];
   select(a, k, 0, a.length - 1);
   return a[k];
 }
