@@ -68,3 +68,11 @@ export function fieldMessage(path: string, code: string | undefined, fallback?: 
   const key = code === 'optionality' ? 'required' : (code ?? 'invalid');
   return fieldWords[field]?.[key] ?? anyFieldWords[key] ?? fallback ?? 'Check this value.';
 }
+
+/** A schema's own message ("a value-ladder drill takes 3 to 9 targets") as a sentence. */
+export function schemaSentence(message: string | undefined): string | undefined {
+  const text = message?.trim();
+  if (!text) return undefined;
+  const capital = text.charAt(0).toUpperCase() + text.slice(1);
+  return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}

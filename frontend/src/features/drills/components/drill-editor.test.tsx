@@ -65,4 +65,86 @@ describe('DrillEditor', () => {
       visibility: 'private',
     });
   });
+
+  const chooseKind = async (name: string) => {
+    await userEvent.click(screen.getByRole('combobox', { name: 'Kind' }));
+    await userEvent.click(await screen.findByRole('option', { name }));
+  };
+
+  it('should start a new value ladder from evenly spaced greys, light to dark', async () => {
+    signInAs('teacher');
+    renderApp(<DrillEditor onSaved={vi.fn()} />);
+    await chooseKind('Value ladder');
+    expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
+    const steps = screen.getAllByRole('group', { name: /^Target \d$/ });
+    expect(steps).toHaveLength(5);
+    const lightness = steps.map((step) => Number((within(step).getByLabelText('L*') as HTMLInputElement).value));
+    expect(lightness).toEqual([90, 72.5, 55, 37.5, 20]);
+    for (const step of steps) expect(within(step).getByLabelText('a*')).toHaveValue(0);
+  });
+
+  it('should start a neutral from a mid grey of zero chroma', async () => {
+    signInAs('teacher');
+    renderApp(<DrillEditor onSaved={vi.fn()} />);
+    await chooseKind('Neutral grey');
+    const target = screen.getByRole('group', { name: 'Target 1' });
+    expect(within(target).getByLabelText('L*')).toHaveValue(50);
+    expect(within(target).getByLabelText('a*')).toHaveValue(0);
+    expect(within(target).getByLabelText('b*')).toHaveValue(0);
+    expect(within(target).getByText(/C\* 0\.0/)).toBeInTheDocument();
+  });
+
+  it('should ask before replacing targets the teacher has entered', async () => {
+    signInAs('teacher');
+    renderApp(<DrillEditor onSaved={vi.fn()} />);
+    const hex = within(screen.getByRole('group', { name: 'Target 1' })).getByLabelText('Hex');
+    await userEvent.clear(hex);
+    await userEvent.type(hex, '#336699');
+    await chooseKind('Neutral grey');
+    const dialog = await screen.findByRole('dialog', { name: /Replace the targets/ });
+    await userEvent.click(within(dialog).getByRole('button', { name: 'Stay a match' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(screen.getByRole('combobox', { name: 'Kind' })).toHaveTextContent('Match');
+    expect(within(screen.getByRole('group', { name: 'Target 1' })).getByLabelText('Hex')).toHaveValue('#336699');
+
+    await chooseKind('Neutral grey');
+    await userEvent.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Use the new defaults' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(screen.getByRole('combobox', { name: 'Kind' })).toHaveTextContent('Neutral grey');
+    expect(within(screen.getByRole('group', { name: 'Target 1' })).getByLabelText('L*')).toHaveValue(50);
+  });
+
+  it('should keep the entered targets when the teacher chooses to', async () => {
+    signInAs('teacher');
+    renderApp(<DrillEditor onSaved={vi.fn()} />);
+    const hex = within(screen.getByRole('group', { name: 'Target 1' })).getByLabelText('Hex');
+    await userEvent.clear(hex);
+    await userEvent.type(hex, '#336699');
+    await chooseKind('Flat wash');
+    await userEvent.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Keep my targets' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(screen.getByRole('combobox', { name: 'Kind' })).toHaveTextContent('Flat wash');
+    expect(within(screen.getByRole('group', { name: 'Target 1' })).getByLabelText('Hex')).toHaveValue('#336699');
+  });
+
+  it("should show the shared schema's own message for the targets", async () => {
+    signInAs('teacher');
+    const drill = {
+      id: 'd9',
+      ownerId: 'u1',
+      title: 'Old wash',
+      kind: 'graded-wash' as const,
+      instructions: '',
+      targets: [{ lab: { L: 80, a: 0, b: -10 }, enteredAs: 'lab' as const }],
+      tolerance: {},
+      palette: [],
+      visibility: 'private' as const,
+      createdAt: '2025-01-06T09:00:00.000Z',
+      updatedAt: '2025-01-06T09:00:00.000Z',
+    };
+    renderApp(<DrillEditor drill={drill as never} onSaved={vi.fn()} />);
+    await userEvent.click(screen.getByRole('button', { name: 'Save the drill' }));
+    expect(await screen.findByText('A graded-wash drill takes 2 targets.')).toBeInTheDocument();
+    expect(screen.getByLabelText('Title')).toHaveValue('Old wash');
+  });
 });

@@ -20,7 +20,7 @@ import MenuItem from '@mui/material/MenuItem';
 import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Controller, FormProvider, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
 import { useCreateDrill } from '../api/create-drill';
@@ -28,20 +28,13 @@ import { useUpdateDrill } from '../api/update-drill';
 import { kindWords, type Drill } from '../types';
 import { PigmentCautions } from '@/components/colour/pigment-cautions';
 import { PigmentsField } from '@/components/colour/pigments-field';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
+import { schemaSentence } from '@/lib/error-words';
+import { defaultTargets, fitTargets, isDefaultTargets, ladderStep } from './kind-defaults';
 import { MeasureSwatch } from './measure-swatch';
 import { TargetField } from './target-field';
 
 const optionalNumber = { setValueAs: (v: string | number | undefined) => (v === '' || v === undefined ? undefined : Number(v)) };
-
-/** A new target for a kind: a ladder's steps run light to dark, anything else starts mid-grey. */
-function defaultTarget(kind: DrillKind, index: number, count: number): TargetInput {
-  if (kind === 'value-ladder') {
-    const L = 88 - (index * 64) / Math.max(count - 1, 1);
-    return { hex: labToHex({ L, a: 2, b: 6 }) };
-  }
-  if (kind === 'neutral') return { lab: { L: 50, a: 0, b: 0 } };
-  return { hex: index === 0 ? '#8a5a3c' : '#d9c2a0' };
-}
 
 /** What the API stores (CIELAB with how it was entered) back to what the teacher typed. */
 export function drillToForm(drill: Drill): CreateDrillInput {
@@ -76,7 +69,7 @@ const emptyDrill: CreateDrillInput = {
   title: '',
   kind: 'match',
   instructions: '',
-  targets: [{ hex: '#8a5a3c' }],
+  targets: defaultTargets('match'),
   tolerance: {},
   palette: [],
   visibility: 'private',
@@ -107,16 +100,23 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
   const { errors } = form.formState;
   const [min, max] = targetCountByKind[kind];
 
-  // Keep the number of targets inside what the kind takes.
-  useEffect(() => {
-    const count = targets.fields.length;
-    if (count > max) targets.remove(Array.from({ length: count - max }, (_, i) => max + i));
-    if (count < min) {
-      const wanted = kind === 'value-ladder' ? 5 : min;
-      targets.append(Array.from({ length: wanted - count }, (_, i) => defaultTarget(kind, count + i, wanted)));
-    }
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [kind, min, max]);
+  // A kind change waiting for the teacher's answer: their targets are not the defaults.
+  const [pendingKind, setPendingKind] = useState<DrillKind>();
+
+  const switchKind = (next: DrillKind, targetsFor: 'defaults' | 'keep') => {
+    const replacement =
+      targetsFor === 'defaults' ? defaultTargets(next) : fitTargets(next, form.getValues('targets'), targetCountByKind[next]);
+    form.setValue('kind', next, { shouldDirty: true });
+    targets.replace(replacement);
+    form.clearErrors('targets');
+    setPendingKind(undefined);
+  };
+
+  const onKindChange = (next: DrillKind) => {
+    if (next === kind) return;
+    if (isDefaultTargets(kind, form.getValues('targets'))) switchKind(next, 'defaults');
+    else setPendingKind(next);
+  };
 
   const onSubmit = form.handleSubmit((values) => {
     setFormError(undefined);
@@ -146,7 +146,14 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
             name="kind"
             control={form.control}
             render={({ field }) => (
-              <TextField select label="Kind" {...field} sx={{ minWidth: 220 }} helperText={kindWords[field.value].what}>
+              <TextField
+                select
+                label="Kind"
+                {...field}
+                onChange={(event) => onKindChange(event.target.value as DrillKind)}
+                sx={{ minWidth: 220 }}
+                helperText={kindWords[field.value].what}
+              >
                 {drillKinds.map((k) => (
                   <MenuItem key={k} value={k}>
                     {kindWords[k].name}
@@ -182,7 +189,7 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
             }
           />
           {errors.targets?.root?.message || errors.targets?.message ? (
-            <Alert severity="error">{errors.targets?.root?.message ?? errors.targets?.message}</Alert>
+            <Alert severity="error">{schemaSentence(errors.targets?.root?.message ?? errors.targets?.message)}</Alert>
           ) : null}
           {targets.fields.map((field, index) => (
             <TargetField
@@ -194,7 +201,7 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
           {targets.fields.length < max && (
             <Button
               startIcon={<AddOutlined />}
-              onClick={() => targets.append(defaultTarget(kind, targets.fields.length, targets.fields.length + 1))}
+              onClick={() => targets.append(ladderStep(targets.fields.length, targets.fields.length + 1))}
               sx={{ alignSelf: 'flex-start' }}
             >
               Add a step
@@ -289,6 +296,17 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
         <Button type="submit" variant="contained" size="large" loading={saving} sx={{ alignSelf: 'flex-start' }}>
           {drill ? 'Save the drill' : 'Create the drill'}
         </Button>
+        <ConfirmDialog
+          open={pendingKind !== undefined}
+          title={`Replace the targets for a ${pendingKind ? kindWords[pendingKind].name.toLowerCase() : ''} drill?`}
+          confirmLabel="Use the new defaults"
+          cancelLabel={`Stay a ${kindWords[kind].name.toLowerCase()}`}
+          extra={{ label: 'Keep my targets', onClick: () => pendingKind && switchKind(pendingKind, 'keep') }}
+          onConfirm={() => pendingKind && switchKind(pendingKind, 'defaults')}
+          onCancel={() => setPendingKind(undefined)}
+        >
+          {`You have entered targets of your own. The new kind's defaults would replace them; keeping them changes only the number of targets to what the new kind takes.`}
+        </ConfirmDialog>
       </Stack>
     </FormProvider>
   );

@@ -13,6 +13,7 @@ import { useFormContext, useWatch, type FieldError } from 'react-hook-form';
 import { colourFacts, temperatureWord } from '@/components/colour/colour-facts';
 import { swatchSurface } from '@/theme/theme';
 import { fieldHelp } from '@/lib/form-errors';
+import { schemaSentence } from '@/lib/error-words';
 import { convertTarget, entryMode, targetLab, type EntryMode } from './target-colour';
 
 const numberInput = { setValueAs: (v: string) => (v === '' ? undefined : Number(v)) };
@@ -115,7 +116,9 @@ export function TargetField({ index, onRemove }: { index: number; onRemove?: () 
           <TextField label="Label (optional)" size="small" {...register(`${name}.label`)} sx={{ maxWidth: 300 }} />
           {errors?.message && !errors.hex && !errors.lab && !errors.lch && (
             <Typography color="error" variant="body2">
-              Give the colour once: as hex, as Lab or as LCh.
+              {errors.type === 'one-colour'
+                ? 'Give the colour once: as hex, as Lab or as LCh.'
+                : (schemaSentence(errors.message) ?? 'Check this colour.')}
             </Typography>
           )}
         </Stack>
