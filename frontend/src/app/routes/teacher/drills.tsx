@@ -3,6 +3,7 @@ import { Link as RouterLink } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { DrillList } from '@/features/drills/components/drill-list';
+import { DrillManageActions } from '@/features/drills/components/drill-manage-actions';
 import { getDrillsQueryOptions } from '@/features/drills/api/get-drills';
 import { prefetchLoader } from '@/lib/route-loader';
 
@@ -28,6 +29,7 @@ export default function TeacherDrillsRoute() {
             <Button component={RouterLink} to={paths.teacher.assign.getHref({ drillId: drill.id })} aria-label={`Assign ${drill.title}`}>
               Assign
             </Button>
+            <DrillManageActions drill={drill} />
           </>
         )}
       />

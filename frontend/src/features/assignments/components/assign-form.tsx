@@ -1,5 +1,6 @@
 import { yupResolver } from '@hookform/resolvers/yup';
 import { createAssignmentSchema } from '@mixmark/common';
+import { date } from 'yup';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import MenuItem from '@mui/material/MenuItem';
@@ -10,6 +11,7 @@ import { useForm } from 'react-hook-form';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
 import { useCreateAssignment } from '../api/create-assignment';
 import type { AssignmentView } from '../types';
+import { toLocalInput } from './due-date';
 
 /** `datetime-local` wants local time without a zone: a week from now at 18:00 by default. */
 function defaultDue(now = new Date()): string {
@@ -18,6 +20,14 @@ function defaultDue(now = new Date()): string {
   const pad = (n: number) => String(n).padStart(2, '0');
   return `${due.getFullYear()}-${pad(due.getMonth() + 1)}-${pad(due.getDate())}T18:00`;
 }
+
+/** The shared schema, plus: a new assignment is due from now on (a past date is a typo). */
+const assignSchema = createAssignmentSchema.shape({
+  dueAt: date()
+    .typeError('Choose a due date and time.')
+    .required('Choose a due date and time.')
+    .test('future', 'This date has passed: choose a due date and time from now on.', (value) => !value || value.getTime() > Date.now()),
+});
 
 export function AssignForm({
   classes,
@@ -34,7 +44,7 @@ export function AssignForm({
 }) {
   const [formError, setFormError] = useState<string>();
   const form = useForm({
-    resolver: yupResolver(createAssignmentSchema),
+    resolver: yupResolver(assignSchema),
     defaultValues: {
       classId: defaultClassId,
       drillId: defaultDrillId,
@@ -86,10 +96,10 @@ export function AssignForm({
       <TextField
         label="Due"
         type="datetime-local"
-        slotProps={{ inputLabel: { shrink: true } }}
         {...form.register('dueAt')}
         error={Boolean(errors.dueAt)}
-        helperText={errors.dueAt ? 'Choose a due date and time.' : undefined}
+        slotProps={{ inputLabel: { shrink: true }, htmlInput: { min: toLocalInput(new Date()) } }}
+        helperText={errors.dueAt ? (errors.dueAt.type === 'future' ? errors.dueAt.message : 'Choose a due date and time.') : undefined}
       />
       <TextField
         label="Note for the students (optional)"

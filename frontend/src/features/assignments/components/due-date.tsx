@@ -21,3 +21,9 @@ export function DueDate({ dueAt }: { dueAt: string }) {
     </Typography>
   );
 }
+
+/** A date as `datetime-local` wants it: local time, no zone ("2026-03-14T18:00"). */
+export function toLocalInput(date: Date): string {
+  const pad = (n: number) => String(n).padStart(2, '0');
+  return `${date.getFullYear()}-${pad(date.getMonth() + 1)}-${pad(date.getDate())}T${pad(date.getHours())}:${pad(date.getMinutes())}`;
+}

@@ -147,4 +147,34 @@ describe('DrillEditor', () => {
     expect(await screen.findByText('A graded-wash drill takes 2 targets.')).toBeInTheDocument();
     expect(screen.getByLabelText('Title')).toHaveValue('Old wash');
   });
+
+  it("should show the server's words when a drill in use cannot change kind", async () => {
+    signInAs('teacher');
+    const message = 'This drill has already been assigned or attempted, so its kind can no longer change.';
+    server.use(
+      http.put('*/api/drills/d7', () =>
+        HttpResponse.json({ statusCode: 409, code: 'drill_in_use', message, details: { kind: 'drill_in_use' } }, { status: 409 }),
+      ),
+    );
+    const drill = {
+      id: 'd7',
+      ownerId: 'u1',
+      title: 'Grey from complements',
+      kind: 'match' as const,
+      instructions: '',
+      targets: [{ lab: { L: 50, a: 0, b: 0 }, enteredAs: 'lab' as const }],
+      tolerance: {},
+      palette: [],
+      visibility: 'private' as const,
+      createdAt: '2025-01-06T09:00:00.000Z',
+      updatedAt: '2025-01-06T09:00:00.000Z',
+    };
+    renderApp(<DrillEditor drill={drill as never} onSaved={vi.fn()} />);
+    await chooseKind('Neutral grey');
+    await userEvent.click(within(await screen.findByRole('dialog')).getByRole('button', { name: 'Keep my targets' }));
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    await userEvent.click(screen.getByRole('button', { name: 'Save the drill' }));
+    expect(await screen.findByText(message)).toBeInTheDocument();
+    expect(screen.getByRole('combobox', { name: 'Kind' })).toHaveTextContent('Neutral grey');
+  });
 });

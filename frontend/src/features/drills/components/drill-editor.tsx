@@ -29,7 +29,8 @@ import { kindWords, type Drill } from '../types';
 import { PigmentCautions } from '@/components/colour/pigment-cautions';
 import { PigmentsField } from '@/components/colour/pigments-field';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
-import { schemaSentence } from '@/lib/error-words';
+import { toApiError } from '@/lib/api-client';
+import { errorMessage, schemaSentence } from '@/lib/error-words';
 import { defaultTargets, fitTargets, isDefaultTargets, ladderStep } from './kind-defaults';
 import { MeasureSwatch } from './measure-swatch';
 import { TargetField } from './target-field';
@@ -120,10 +121,13 @@ export function DrillEditor({ drill, onSaved }: { drill?: Drill; onSaved: (saved
 
   const onSubmit = form.handleSubmit((values) => {
     setFormError(undefined);
-    const onError = (error: unknown) =>
+    const onError = (error: unknown) => {
+      // A drill already assigned or attempted keeps its kind and target count: the server says why.
+      if (toApiError(error).code === 'drill_in_use') return setFormError(errorMessage(error));
       setFormError(
         applyServerErrors(error, form.setError, ['title', 'kind', 'instructions', 'targets', 'tolerance', 'palette', 'visibility']),
       );
+    };
     if (drill) update.mutate(values, { onError });
     else create.mutate(values, { onError });
   });
