@@ -78,4 +78,13 @@ describe('editing a drill that is in use (e2e, real PostgreSQL)', () => {
     expect(response.body.details.targets).toBeUndefined();
     await request(http).put(`/api/drills/${drill.id}`).set(teacher.auth).send({ title: 'Match', kind: 'match', targets: [{ hex: '#b05a2a' }] }).expect(200);
   });
+
+  it('should refuse targets that contradict the kind with a 400 naming the target', async () => {
+    const orange = await request(http).post('/api/drills').set(teacher.auth).send({ title: 'Grey', kind: 'neutral', targets: [{ hex: '#e07020' }] }).expect(400);
+    expect(orange.body).toMatchObject({ statusCode: 400, code: 'validation_failed', details: { 'targets[0]': 'not-neutral' } });
+    expect(orange.body.message).toMatch(/too colourful for a grey/);
+    const upward = await request(http).post('/api/drills').set(teacher.auth).send({ title: 'Ladder', kind: 'value-ladder', targets: ladder([30, 50, 70]) }).expect(400);
+    expect(upward.body).toMatchObject({ code: 'validation_failed', details: { 'targets[1]': 'ladder-step' } });
+    expect(upward.body.message).toMatch(/^step 2 \(L\* 50\.0\) is lighter than step 1/);
+  });
 });

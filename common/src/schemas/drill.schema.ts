@@ -1,5 +1,10 @@
 import { array, mixed, number, object, string, type InferType } from 'yup';
-import { drillKinds, type DrillKind } from '../types/drill.js';
+import { hexToLab } from '../colour/srgb/hex-lab.js';
+import { labToLch, lchToLab } from '../colour/lab/lab-lch.js';
+import { fixed1 } from '../grading/format-numbers.js';
+import { resolveTolerance } from '../grading/tolerance-bands.js';
+import type { Lab } from '../types/colour.js';
+import { drillKinds, type DrillKind, type Tolerance } from '../types/drill.js';
 
 /** How many targets each kind takes (one per card window; a graded wash has a start and an end). */
 export const targetCountByKind: Record<DrillKind, [min: number, max: number]> = {
@@ -41,6 +46,93 @@ export const targetInputSchema = object({
 });
 export type TargetInput = InferType<typeof targetInputSchema>;
 
+/**
+ * The CIELAB (D65) of a target as entered, or `undefined` while it is not one valid colour
+ * (the target's own checks say why). The server's stored form is the same conversion.
+ */
+export function targetInputLab(target: Partial<TargetInput> | undefined): Lab | undefined {
+  if (!target) return undefined;
+  const given = [target.hex, target.lab, target.lch].filter((v) => v !== undefined);
+  if (given.length !== 1) return undefined;
+  const finite = (...xs: unknown[]) => xs.every((x) => typeof x === 'number' && Number.isFinite(x));
+  if (target.hex !== undefined) {
+    const hex = target.hex.trim();
+    return hexToLab(hex.startsWith('#') ? hex : `#${hex}`);
+  }
+  if (target.lch !== undefined) {
+    const { L, C, h } = target.lch;
+    return finite(L, C, h) ? lchToLab({ L, C, h }) : undefined;
+  }
+  const { L, a, b } = target.lab!;
+  return finite(L, a, b) ? { L, a, b } : undefined;
+}
+
+/**
+ * The least L* between neighbouring steps of a value ladder (Mixmark's choice). 5 L* is about
+ * half a Munsell value step (the ASTM D1535 value function gives close to 10 L* per value step
+ * in the middle of the range), the finest spacing painters' value scales use; a photo through
+ * the card reads each swatch to about ±1–2 ΔE00 (docs/grading.md), so the difference of two
+ * readings is uncertain by up to about 3 L*, and a closer pair of targets could not be told
+ * apart from a flat step. It still leaves room for the longest ladder: 9 steps from paper
+ * (L* ≈ 90) to the darkest mixes (L* ≈ 20) are 8.75 L* apart.
+ */
+export const ladderMinStepL = 5;
+
+/**
+ * Targets that contradict their drill's kind: a ladder not running light to dark with at least
+ * {@link ladderMinStepL} between steps, or a neutral target with more chroma than the drill's
+ * own neutrality limit (`tolerance.maxChroma`, else the grading default of
+ * `defaultTolerances.neutral`), which a perfect match of it would fail. Returns the first
+ * problem as the index of the target and a sentence for the teacher, or `undefined`.
+ */
+export function targetsKindProblem(
+  kind: DrillKind,
+  targets: (Partial<TargetInput> | undefined)[],
+  tolerance: Partial<Tolerance> = {},
+): { index: number; type: 'ladder-step' | 'not-neutral'; message: string } | undefined {
+  const labs = targets.map(targetInputLab);
+  if (kind === 'value-ladder') {
+    for (let i = 1; i < labs.length; i += 1) {
+      const before = labs[i - 1];
+      const here = labs[i];
+      if (!before || !here) continue;
+      const step = before.L - here.L;
+      if (step >= ladderMinStepL) continue;
+      const relation =
+        step > 0
+          ? `is only ${fixed1(step)} L* darker than`
+          : step === 0
+            ? 'is as light as'
+            : `is lighter than`;
+      return {
+        index: i,
+        type: 'ladder-step',
+        message:
+          `step ${i + 1} (L* ${fixed1(here.L)}) ${relation} step ${i} (L* ${fixed1(before.L)}): ` +
+          `a value ladder runs from light to dark, each step at least ${ladderMinStepL} L* darker than the one before`,
+      };
+    }
+  }
+  if (kind === 'neutral') {
+    const maxChroma = resolveTolerance('neutral', tolerance).maxChroma!;
+    for (let i = 0; i < labs.length; i += 1) {
+      const lab = labs[i];
+      if (!lab) continue;
+      const { C } = labToLch(lab);
+      if (C <= maxChroma) continue;
+      const which = labs.length > 1 ? `target ${i + 1}` : 'the target';
+      return {
+        index: i,
+        type: 'not-neutral',
+        message:
+          `${which} has a chroma (C*) of ${fixed1(C)}, too colourful for a grey: ` +
+          `a neutral drill's target needs C* of at most ${fixed1(maxChroma)}, the limit its students are graded by`,
+      };
+    }
+  }
+  return undefined;
+}
+
 const toleranceSchema = object({
   deltaE: number().positive().max(50).optional(),
   maxChroma: number().positive().max(50).optional(),
@@ -77,6 +169,14 @@ export const createDrillSchema = object({
       if (targets.length >= min && targets.length <= max) return true;
       const wanted = min === max ? `${min}` : `${min} to ${max}`;
       return this.createError({ message: `a ${kind} drill takes ${wanted} targets`, type: 'count' });
+    })
+    .test('fit-kind', function (targets) {
+      const kind = this.parent.kind as DrillKind | undefined;
+      if (!kind || !targets || !(kind in targetCountByKind)) return true;
+      const tolerance = (this.parent.tolerance ?? {}) as Partial<Tolerance>;
+      const problem = targetsKindProblem(kind, targets, typeof tolerance === 'object' ? tolerance : {});
+      if (!problem) return true;
+      return this.createError({ path: `${this.path}[${problem.index}]`, message: problem.message, type: problem.type });
     }),
   tolerance: toleranceSchema,
   palette: array(allowedPaintSchema.required()).max(12).default([]),
