@@ -49,12 +49,18 @@ async function photo(width: number, height: number): Promise<Buffer> {
     .toBuffer();
 }
 
+const cpuMs = (u: NodeJS.CpuUsage): number => (u.user + u.system) / 1000;
+
 const median = (values: number[]): number =>
   [...values].sort((a, b) => a - b)[Math.floor(values.length / 2)];
 
 async function bench(label: string, width: number, height: number, runs: number): Promise<void> {
   const jpeg = await photo(width, height);
   const floors: number[] = [];
+  // CPU time of this process (all its threads) beside the wall time: on cores shared with
+  // other work the wall time also counts waiting for a core, the CPU time much less so.
+  const floorCpus: number[] = [];
+  const totalCpus: number[] = [];
   const totals: number[] = [];
   const stages = {
     decode: [] as number[],
@@ -71,6 +77,7 @@ async function bench(label: string, width: number, height: number, runs: number)
     let factor = 1;
     while (Math.max(width, height) / factor > 2048) factor *= 2;
     let t = performance.now();
+    let cpu = process.cpuUsage();
     await sharp(jpeg)
       .resize(Math.round(width / factor), Math.round(height / factor), {
         fit: 'fill',
@@ -79,12 +86,17 @@ async function bench(label: string, width: number, height: number, runs: number)
       .raw()
       .toBuffer();
     const floorMs = performance.now() - t;
+    const floorCpu = cpuMs(process.cpuUsage(cpu));
     t = performance.now();
+    cpu = process.cpuUsage();
     const { result, timings } = await measurePhoto(jpeg);
     const totalMs = performance.now() - t;
+    const totalCpu = cpuMs(process.cpuUsage(cpu));
     ok &&= result.ok;
     if (i < 0) continue;
     floors.push(floorMs);
+    floorCpus.push(floorCpu);
+    totalCpus.push(totalCpu);
     totals.push(totalMs);
     for (const key of Object.keys(stages) as (keyof typeof stages)[])
       stages[key].push(timings[key]);
@@ -102,6 +114,7 @@ async function bench(label: string, width: number, height: number, runs: number)
   console.log(
     `${label} (${width}×${height}, ${(jpeg.length / 1e6).toFixed(1)} MB JPEG, measured ${ok ? 'ok' : 'WITH ERRORS'}): ` +
       `median ${total.toFixed(0)} ms end to end; floor (sharp decode + shrink) ${floor.toFixed(0)} ms; ratio ${(total / floor).toFixed(2)}×; ` +
+      `CPU time ${median(totalCpus).toFixed(0)} ms against the floor's ${median(floorCpus).toFixed(0)} ms (${(median(totalCpus) / median(floorCpus)).toFixed(2)}×); ` +
       `shares (stage medians): decode ${pct(shares.decode)}, detect ${pct(shares.detect)}, fit ${pct(shares.fit)}, sample ${pct(shares.sample)} ` +
       `(${shares.decode.toFixed(0)} / ${shares.detect.toFixed(0)} / ${shares.fit.toFixed(0)} / ${shares.sample.toFixed(0)} ms; one untimed run first)`,
   );
