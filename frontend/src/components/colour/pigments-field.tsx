@@ -1,5 +1,6 @@
 import TextField from '@mui/material/TextField';
 import { useState } from 'react';
+import { parsePigmentCodes } from './parse-pigment-codes';
 
 /** Colour Index codes typed as "PB29, PR209": the text as typed, the list to the form. */
 export function PigmentsField({
@@ -23,15 +24,10 @@ export function PigmentsField({
       value={text}
       onChange={(event) => {
         setText(event.target.value);
-        onChange(
-          event.target.value
-            .split(/[\s,;]+/)
-            .map((code) => code.trim().toUpperCase())
-            .filter(Boolean),
-        );
+        onChange(parsePigmentCodes(event.target.value));
       }}
       error={error}
-      helperText={helperText ?? 'Colour Index codes, such as PB29, PR209'}
+      helperText={helperText ?? 'Colour Index codes, such as PB29, PR 209'}
     />
   );
 }
