@@ -74,12 +74,14 @@ describe('assignment cells (e2e, real PostgreSQL triggers)', () => {
     assignments = [];
     for (const days of [-3, 2, 9]) {
       const dueAt = new Date(Date.now() + days * dayMs);
+      // A new assignment is due from now on; a past one is made by moving its due date.
       const made = await request(http)
         .post('/api/assignments')
         .set(teacher.auth)
-        .send({ classId, drillId, dueAt: dueAt.toISOString() })
+        .send({ classId, drillId, dueAt: new Date(Math.max(dueAt.getTime(), Date.now() + dayMs)).toISOString() })
         .expect(201);
-      assignments.push({ id: made.body.id, dueAt: new Date(made.body.dueAt) });
+      const moved = await request(http).patch(`/api/assignments/${made.body.id}`).set(teacher.auth).send({ dueAt: dueAt.toISOString() }).expect(200);
+      assignments.push({ id: made.body.id, dueAt: new Date(moved.body.dueAt) });
     }
   });
   afterAll(async () => {
