@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import type { Mark } from '@mixmark/common';
 import { DataSource } from 'typeorm';
 import { statusFromSummary, type AttemptSummary } from '../assignments/assignment-status';
+import { IsoDate } from '../assignments/iso-date';
 import { preparedQuery } from '../assignments/prepared-query';
 import { ClassesService } from '../classes/classes.service';
 import type { AuthUser } from '../common/decorators/current-user.decorator';
@@ -85,7 +86,7 @@ export class ProgressService {
       this.dataSource,
       'gradebook',
       `SELECT c.name,
-              (SELECT COALESCE(json_agg(json_build_array(a.id, d.title, d.kind, floor(extract(epoch FROM a.due_at) * 1000)) ORDER BY a.due_at, a.created_at), '[]')
+              (SELECT COALESCE(json_agg(json_build_array(a.id, d.title, d.kind, floor(extract(epoch FROM a.due_at) * 1000), to_char(a.due_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')) ORDER BY a.due_at, a.created_at), '[]')
                  FROM assignments a JOIN drills d ON d.id = a.drill_id WHERE a.class_id = c.id)::text AS assignments,
               (SELECT COALESCE(json_agg(json_build_array(u.id, u.display_name, u.email) ORDER BY u.display_name), '[]')
                  FROM class_members m JOIN users u ON u.id = m.student_id WHERE m.class_id = c.id)::text AS students,
@@ -108,14 +109,14 @@ export class ProgressService {
         code: 'not_found',
         message: 'There is no class with this id.',
       });
-    const assignments = (JSON.parse(book.assignments) as [string, string, string, number][]).map(
-      ([id, drillTitle, kind, due]) => ({
-        id,
-        drillTitle,
-        kind,
-        dueAt: new Date(due),
-      }),
-    );
+    const assignments = (
+      JSON.parse(book.assignments) as [string, string, string, number, string][]
+    ).map(([id, drillTitle, kind, dueMs, dueIso]) => ({
+      id,
+      drillTitle,
+      kind,
+      dueAt: new IsoDate(dueMs, dueIso),
+    }));
     const cellsOf = new Map<string, Map<string, GradebookCell>>();
     const dueOf = new Map(assignments.map((a) => [a.id, a.dueAt]));
     type CellRow = [
