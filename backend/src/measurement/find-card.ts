@@ -421,6 +421,16 @@ export function findCard(raster: Raster8): CardDetection | undefined {
   addHit(first);
   let fit = fitAll([...hits.values()]);
   if (!fit) return undefined;
+  /** A marker seen by the finder scan: its three finder centres, refined, are its points. */
+  const addScanned = (corner: number, image: Point[]): void => {
+    hits.set(corner, {
+      payload: { ...payload, corner: corner as CardPayload['corner'] },
+      card: toCard(layout.markers[corner], finderModules),
+      image,
+      weights: [1, 1, 1],
+    });
+    fit = fitAll([...hits.values()]) ?? fit;
+  };
   const start = payload.corner;
   const order = [start, (start + 1) % 4, (start + 3) % 4, (start + 2) % 4];
   const symbols = found.groups.map(orientSymbol).filter((s) => s !== undefined);
@@ -430,13 +440,7 @@ export function findCard(raster: Raster8): CardDetection | undefined {
     // marker's points (jsQR is not run again).
     const image = symbolAt(raster, symbols, fit.h, layout, marker);
     if (image) {
-      hits.set(corner, {
-        payload: { ...payload, corner: corner as CardPayload['corner'] },
-        card: toCard(marker, finderModules),
-        image,
-        weights: [1, 1, 1],
-      });
-      fit = fitAll([...hits.values()]) ?? fit;
+      addScanned(corner, image);
       continue;
     }
     // A first marker read at working resolution is not read again.
@@ -484,14 +488,7 @@ export function findCard(raster: Raster8): CardDetection | undefined {
       if (hits.has(corner)) continue;
       const marker = layout.markers[corner];
       const image = symbolAt(raster, more, fit.h, layout, marker);
-      if (!image) continue;
-      hits.set(corner, {
-        payload: { ...payload, corner: corner as CardPayload['corner'] },
-        card: toCard(marker, finderModules),
-        image,
-        weights: [1, 1, 1],
-      });
-      fit = fitAll([...hits.values()]) ?? fit;
+      if (image) addScanned(corner, image);
     }
   }
   const missing: CardDetection['missing'] = [];

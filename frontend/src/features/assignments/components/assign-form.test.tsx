@@ -31,7 +31,7 @@ describe('AssignForm', () => {
     fireEvent.change(screen.getByLabelText('Due'), { target: { value: '2020-01-10T18:00' } });
     await userEvent.type(screen.getByLabelText('Note for the students (optional)'), 'Use the warm red.');
     await userEvent.click(screen.getByRole('button', { name: 'Assign' }));
-    expect(await screen.findByText('This date has passed: choose a due date and time from now on.')).toBeInTheDocument();
+    expect(await screen.findByText('This due date has passed: choose a due date and time from now on.')).toBeInTheDocument();
     expect(posted).toBe(0);
     expect(screen.getByLabelText('Note for the students (optional)')).toHaveValue('Use the warm red.');
   });

@@ -1,6 +1,5 @@
 import { yupResolver } from '@hookform/resolvers/yup';
 import { createAssignmentSchema } from '@mixmark/common';
-import { date } from 'yup';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import MenuItem from '@mui/material/MenuItem';
@@ -8,6 +7,7 @@ import Stack from '@mui/material/Stack';
 import TextField from '@mui/material/TextField';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
+import { schemaSentence } from '@/lib/error-words';
 import { applyServerErrors, fieldHelp } from '@/lib/form-errors';
 import { useCreateAssignment } from '../api/create-assignment';
 import type { AssignmentView } from '../types';
@@ -20,14 +20,6 @@ function defaultDue(now = new Date()): string {
   const pad = (n: number) => String(n).padStart(2, '0');
   return `${due.getFullYear()}-${pad(due.getMonth() + 1)}-${pad(due.getDate())}T18:00`;
 }
-
-/** The shared schema, plus: a new assignment is due from now on (a past date is a typo). */
-const assignSchema = createAssignmentSchema.shape({
-  dueAt: date()
-    .typeError('Choose a due date and time.')
-    .required('Choose a due date and time.')
-    .test('future', 'This date has passed: choose a due date and time from now on.', (value) => !value || value.getTime() > Date.now()),
-});
 
 export function AssignForm({
   classes,
@@ -44,7 +36,7 @@ export function AssignForm({
 }) {
   const [formError, setFormError] = useState<string>();
   const form = useForm({
-    resolver: yupResolver(assignSchema),
+    resolver: yupResolver(createAssignmentSchema),
     defaultValues: {
       classId: defaultClassId,
       drillId: defaultDrillId,
@@ -99,7 +91,7 @@ export function AssignForm({
         {...form.register('dueAt')}
         error={Boolean(errors.dueAt)}
         slotProps={{ inputLabel: { shrink: true }, htmlInput: { min: toLocalInput(new Date()) } }}
-        helperText={errors.dueAt ? (errors.dueAt.type === 'future' ? errors.dueAt.message : 'Choose a due date and time.') : undefined}
+        helperText={errors.dueAt ? (errors.dueAt.type === 'future' ? schemaSentence(errors.dueAt.message) : 'Choose a due date and time.') : undefined}
       />
       <TextField
         label="Note for the students (optional)"
