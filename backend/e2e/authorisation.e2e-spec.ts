@@ -16,7 +16,7 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
   let app: INestApplication;
   let http: ReturnType<INestApplication['getHttpServer']>;
   const accounts = {} as Record<Exclude<Who, 'anonymous'>, TestAccount>;
-  const ids = {} as { classId: string; drillId: string; assignmentId: string; attemptId: string; paintId: string };
+  const ids = {} as { classId: string; drillId: string; assignmentId: string; attemptId: string; paintId: string; invitationId: string };
 
   beforeAll(async () => {
     app = await createTestApp();
@@ -33,6 +33,8 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
     const t = accounts.teacher.auth;
     const klass = await request(http).post('/api/classes').set(t).send({ name: 'Matrix class' }).expect(201);
     ids.classId = klass.body.id;
+    const invited = await request(http).post(`/api/classes/${ids.classId}/invitations`).set(t).send({ emails: ['matrix-pending@studio.test'] }).expect(201);
+    ids.invitationId = invited.body[0].id;
     await request(http).post('/api/classes/join').set(accounts.student.auth).send({ code: klass.body.code }).expect(200);
     const drill = await request(http).post('/api/drills').set(t).send({ title: 'Matrix drill', kind: 'neutral', targets: [{ lab: { L: 50, a: 0, b: 0 } }] }).expect(201);
     ids.drillId = drill.body.id;
@@ -56,7 +58,7 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
     await app.close();
   });
 
-  type Row = { method: 'get' | 'post' | 'patch' | 'put'; path: () => string; body?: () => object; expect: Record<Who, number> };
+  type Row = { method: 'get' | 'post' | 'patch' | 'put' | 'delete'; path: () => string; body?: () => object; expect: Record<Who, number> };
   const statuses = (...codes: number[]) => Object.fromEntries(everyone.map((who, i) => [who, codes[i]])) as Record<Who, number>;
   //                                                                                  anon stu  oStu tea  oTea admin
   const rows: Row[] = [
@@ -69,6 +71,9 @@ describe('authorisation matrix (e2e, real PostgreSQL)', () => {
     { method: 'get', path: () => `/api/classes/${ids.classId}/students`, expect: statuses(401, 403, 403, 200, 404, 200) },
     { method: 'get', path: () => `/api/classes/${ids.classId}/invitations`, expect: statuses(401, 403, 403, 200, 404, 200) },
     { method: 'post', path: () => `/api/classes/${ids.classId}/invitations`, body: () => ({ emails: ['matrix@studio.test'] }), expect: statuses(401, 403, 403, 201, 404, 201) },
+    { method: 'post', path: () => `/api/classes/${ids.classId}/invitations/${ids.invitationId}/resend`, expect: statuses(401, 403, 403, 200, 404, 200) },
+    // Revoking works once: after the teacher's 204 the invitation is no longer pending, so the admin's call is a 404.
+    { method: 'delete', path: () => `/api/classes/${ids.classId}/invitations/${ids.invitationId}`, expect: statuses(401, 403, 403, 204, 404, 404) },
     { method: 'get', path: () => `/api/classes/${ids.classId}/gradebook`, expect: statuses(401, 403, 403, 200, 404, 200) },
     { method: 'get', path: () => `/api/classes/${ids.classId}/gradebook.csv`, expect: statuses(401, 403, 403, 200, 404, 200) },
     { method: 'get', path: () => '/api/drills', expect: statuses(401, 200, 200, 200, 200, 200) },

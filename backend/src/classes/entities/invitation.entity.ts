@@ -24,6 +24,10 @@ export class Invitation {
   @Column({ name: 'accepted_by_id', type: 'uuid', nullable: true })
   acceptedById: string | null;
 
+  /** Set when the teacher revokes the invitation; the link then no longer works. */
+  @Column({ name: 'revoked_at', type: 'timestamptz', nullable: true })
+  revokedAt: Date | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 }

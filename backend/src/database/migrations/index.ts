@@ -4,6 +4,7 @@ import { AddWeeklyDigestPreference1764723600000 } from './1764723600000-AddWeekl
 import { AddAttemptOverlayPlan1764810000000 } from './1764810000000-AddAttemptOverlayPlan';
 import { AddAssignmentCells1764892800000 } from './1764892800000-AddAssignmentCells';
 import { AddAssignmentStandings1764896400000 } from './1764896400000-AddAssignmentStandings';
+import { AddInvitationRevokedAt1764900000000 } from './1764900000000-AddInvitationRevokedAt';
 
 /** Every migration, oldest first. Listed by hand so no glob or folder path is needed at run time. */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   AddAttemptOverlayPlan1764810000000,
   AddAssignmentCells1764892800000,
   AddAssignmentStandings1764896400000,
+  AddInvitationRevokedAt1764900000000,
 ];
