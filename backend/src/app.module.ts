@@ -1,9 +1,9 @@
 import { existsSync } from 'node:fs';
-import { join } from 'node:path';
+import { join, relative, sep } from 'node:path';
 import { Module, type MiddlewareConsumer, type NestModule } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER } from '@nestjs/core';
-import { ServeStaticModule } from '@nestjs/serve-static';
+import { ServeStaticModule, type ServeStaticModuleOptions } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { ApiExceptionFilter } from './common/filters/api-exception.filter';
 import { RequestLoggerMiddleware } from './common/middleware/request-logger.middleware';
@@ -29,6 +29,25 @@ import { ProgressModule } from './progress/progress.module';
 import { QueueModule } from './queue/queue.module';
 import { StorageModule } from './storage/storage.module';
 
+/**
+ * Cache-Control for the built web app. Vite names every file under /assets/ by a hash of its
+ * content, so a browser may keep them for a year without asking again (`immutable`); anything
+ * else, index.html and the SPA fallback above all, is revalidated on every load (`no-cache`), so a
+ * new release is picked up at once. Also called by the fallback for index.html.
+ */
+export function staticCacheHeaders(rootPath: string) {
+  return (res: { setHeader(name: string, value: string): unknown }, filePath: string): void => {
+    const hashed = relative(rootPath, filePath).startsWith(`assets${sep}`);
+    res.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'no-cache');
+  };
+}
+
+/** ServeStaticModule's options for the built web app in `rootPath` (none when it is not built). */
+export function webAppServeOptions(rootPath: string): ServeStaticModuleOptions[] {
+  if (!existsSync(join(rootPath, 'index.html'))) return [];
+  return [{ rootPath, exclude: ['/api/{*path}'], serveStaticOptions: { index: 'index.html', setHeaders: staticCacheHeaders(rootPath) } }];
+}
+
 @Module({
   imports: [
     ConfigModule.forRoot({ isGlobal: true, load: [appConfig, databaseConfig, authConfig, mailConfig, storageConfig], ignoreEnvFile: true }),
@@ -44,11 +63,7 @@ import { StorageModule } from './storage/storage.module';
     // so that the app's own router handles it (its 404 page included).
     ServeStaticModule.forRootAsync({
       inject: [ConfigService],
-      useFactory: (config: ConfigService<AllConfigType>) => {
-        const rootPath = config.getOrThrow('app.frontendDist', { infer: true });
-        if (!existsSync(join(rootPath, 'index.html'))) return [];
-        return [{ rootPath, exclude: ['/api/{*path}'], serveStaticOptions: { index: 'index.html' } }];
-      },
+      useFactory: (config: ConfigService<AllConfigType>) => webAppServeOptions(config.getOrThrow('app.frontendDist', { infer: true })),
     }),
     HealthModule,
     MailModule,
