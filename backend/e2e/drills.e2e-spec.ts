@@ -79,6 +79,36 @@ describe('editing a drill that is in use (e2e, real PostgreSQL)', () => {
     await request(http).put(`/api/drills/${drill.id}`).set(teacher.auth).send({ title: 'Match', kind: 'match', targets: [{ hex: '#b05a2a' }] }).expect(200);
   });
 
+  it('should make a kind change wait for an attempt being recorded at the same time, then refuse it', async () => {
+    const drill = (await request(http).post('/api/drills').set(teacher.auth).send({ title: 'Race', kind: 'match', visibility: 'public', targets: [{ hex: '#3f6fa0' }] }).expect(201)).body;
+    const db = app.get(DataSource);
+    // Stands in for AttemptsService.create: the shared lock it takes on the drill row, then its insert, not yet committed.
+    const recording = db.createQueryRunner();
+    await recording.connect();
+    await recording.startTransaction();
+    try {
+      await recording.query(`SELECT 1 FROM drills WHERE id = $1 FOR KEY SHARE`, [drill.id]);
+      await recording.query(`INSERT INTO attempts (student_id, drill_id, state, photo_key, photo_bytes) VALUES ($1, $2, 'queued', 'attempts/none/photo.jpg', 1)`, [student.id, drill.id]);
+      const put = request(http).put(`/api/drills/${drill.id}`).set(teacher.auth).send({ title: 'Flat', kind: 'flat-wash', targets: [{ hex: '#3f6fa0' }] }).then((r) => r);
+      // The update's row lock must be waiting on the open attempt before that commits (without the lock it would answer 200).
+      for (let i = 0; ; i += 1) {
+        const [{ waiting }] = await db.query<{ waiting: number }[]>(
+          `SELECT count(*)::int AS waiting FROM pg_stat_activity WHERE wait_event_type = 'Lock' AND query LIKE '%FROM drills WHERE id = $1%FOR UPDATE%'`,
+        );
+        if (waiting > 0) break;
+        if (i > 100) throw new Error('the drill update never waited for the attempt being recorded');
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
+      await recording.commitTransaction();
+      const response = await put;
+      expect(response.status).toBe(409);
+      expect(response.body).toMatchObject({ code: 'drill_in_use', details: { kind: 'drill_in_use' } });
+    } finally {
+      if (recording.isTransactionActive) await recording.rollbackTransaction();
+      await recording.release();
+    }
+  });
+
   it('should refuse targets that contradict the kind with a 400 naming the target', async () => {
     const orange = await request(http).post('/api/drills').set(teacher.auth).send({ title: 'Grey', kind: 'neutral', targets: [{ hex: '#e07020' }] }).expect(400);
     expect(orange.body).toMatchObject({ statusCode: 400, code: 'validation_failed', details: { 'targets[0]': 'not-neutral' } });

@@ -84,6 +84,11 @@ export class AttemptsService {
     await this.storage.put(photoKey, stored.bytes);
     try {
       await this.dataSource.transaction(async (manager) => {
+        // A shared lock on the drill row until this commits: a drill update that would change
+        // the kind or the number of targets (DrillsService.update, FOR UPDATE) waits for it and
+        // then sees this attempt, or this waits for the update. (The foreign key check takes the
+        // same lock; it is taken here on purpose, not by accident of the schema.)
+        await manager.query(`SELECT 1 FROM drills WHERE id = $1 FOR KEY SHARE`, [drill.id]);
         await manager.insert(Attempt, { id, studentId: student.id, drillId: drill.id, assignmentId, photoKey, photoBytes: stored.bytes.length, state: 'queued' });
         await this.gradingQueue.enqueue(id, {
           executeSql: async (text, values) => ({ rows: await manager.query(text, values) }),

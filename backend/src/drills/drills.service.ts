@@ -1,7 +1,7 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { CreateDrillInput } from '@mixmark/common';
-import { Brackets, DataSource, Repository } from 'typeorm';
+import { Brackets, DataSource, EntityManager, Repository } from 'typeorm';
 import type { AuthUser } from '../common/decorators/current-user.decorator';
 import { Drill } from './entities/drill.entity';
 import { normaliseTarget } from './normalise-target';
@@ -48,11 +48,24 @@ export class DrillsService {
    * and the target colours themselves (same count) may still change.
    */
   async update(owner: AuthUser, id: string, input: CreateDrillInput): Promise<Drill> {
-    const drill = await this.findOwned(owner, id);
+    await this.findOwned(owner, id);
+    // The check and the write under one row lock: an attempt being recorded holds a shared lock
+    // on the drill row (AttemptsService.create; an assignment's foreign key check takes the same
+    // one), so either it commits first and the check below sees it, or it waits for this update.
+    return this.dataSource.transaction(async (manager) => {
+      const [locked] = await manager.query<{ id: string }[]>(`SELECT id FROM drills WHERE id = $1 AND deleted_at IS NULL FOR UPDATE`, [id]);
+      if (!locked) throw notFound();
+      const drill = await manager.getRepository(Drill).findOneByOrFail({ id });
+      return this.applyUpdate(manager, drill, input);
+    });
+  }
+
+  private async applyUpdate(manager: EntityManager, drill: Drill, input: CreateDrillInput): Promise<Drill> {
+    const id = drill.id;
     const changed: Record<string, string> = {};
     if (input.kind !== drill.kind) changed.kind = 'drill_in_use';
     if (input.targets.length !== drill.targets.length) changed.targets = 'drill_in_use';
-    if (Object.keys(changed).length > 0 && (await this.isInUse(id))) {
+    if (Object.keys(changed).length > 0 && (await this.isInUse(manager, id))) {
       throw new ConflictException({
         code: 'drill_in_use',
         message:
@@ -62,12 +75,12 @@ export class DrillsService {
       });
     }
     Object.assign(drill, this.fields(input));
-    return this.drillsRepository.save(drill);
+    return manager.getRepository(Drill).save(drill);
   }
 
   /** True when any assignment or any attempt (whatever its state) points at the drill. */
-  private async isInUse(id: string): Promise<boolean> {
-    const [row] = await this.dataSource.query<{ used: boolean }[]>(
+  private async isInUse(manager: EntityManager, id: string): Promise<boolean> {
+    const [row] = await manager.query<{ used: boolean }[]>(
       `SELECT EXISTS (SELECT 1 FROM assignments WHERE drill_id = $1) OR EXISTS (SELECT 1 FROM attempts WHERE drill_id = $1) AS used`,
       [id],
     );
