@@ -29,10 +29,28 @@ describe('gradeNeutral', () => {
     expect(grade({ L: 50, a: -6, b: 0 }).feedback[0].text).toContain('green cast');
   });
 
-  it('should pass a faint cast within the chroma limit but mention it', () => {
+  it('should pass a grey within the chroma limit without naming a hue for it', () => {
+    // C* 2.8 at h 45°: under the default limit of 4, where the hue angle means nothing to the eye.
     const mark = grade({ L: 50, a: 2, b: 2 });
     expect(mark.pass).toBe(true);
-    expect(mark.feedback.some((f) => f.severity === 'tip' && f.text.includes('faint'))).toBe(true);
+    const line = mark.feedback.find((f) => f.topic === 'neutrality')!;
+    expect(line.text).toBe('Reads as a grey: its colour is within the limit, too slight to name a cast');
+    expect(line.numbers).toContain('C* 2.8');
+    for (const f of mark.feedback) expect(f.text).not.toMatch(/red|yellow|green|blue/);
+  });
+
+  it('should name no hue for near-zero chroma at any hue angle', () => {
+    for (const [a, b] of [[0.6, 0.1], [-0.4, 0.5], [0.05, -0.7]]) {
+      const mark = grade({ L: 50, a, b });
+      expect(mark.feedback.map((f) => f.text)).toEqual(['A true grey, with no cast to see']);
+    }
+  });
+
+  it('should name the cast once the chroma is over the drill’s own limit', () => {
+    const wide = gradeNeutral({ targets: [{ lab: target }], readings: [{ lab: { L: 50, a: 0, b: 5 } }], tolerance: { maxChroma: 6 } });
+    expect(wide.feedback.find((f) => f.topic === 'neutrality')!.text).not.toContain('yellow');
+    const narrow = gradeNeutral({ targets: [{ lab: target }], readings: [{ lab: { L: 50, a: 0, b: 5 } }], tolerance: { maxChroma: 3 } });
+    expect(narrow.feedback.find((f) => f.topic === 'neutrality')!.text).toBe('Still has a yellow cast: neutralise it with a touch of violet or blue');
   });
 
   it('should fail a grey of the wrong value', () => {

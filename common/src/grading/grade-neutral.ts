@@ -16,7 +16,8 @@ import { resolveTolerance } from './tolerance-bands.js';
  *
  * Checks: `value` (ΔE00 lightness term ≤ tolerance.deltaE) and `neutrality` (C*ab ≤
  * tolerance.maxChroma, scored on the same curve). Hue matters only as the cast's
- * direction, which the feedback names with its remedy.
+ * direction, which the feedback names with its remedy, and only when the reading's chroma is
+ * over that limit: below it the hue angle of a near-grey is meaningless.
  *
  * @param input - grey target(s), one reading each
  * @returns the mark
@@ -60,19 +61,15 @@ export function gradeNeutral({ targets, readings, tolerance }: GradeInput): Mark
       pass: neutral,
     });
     const numbers = `C* ${fixed1(C)} at h ${fixed1(h)}° (a grey needs C* ≤ ${fixed1(maxChroma)})`;
-    if (C >= 1) {
+    // Near C* 0 the hue angle is noise (a C* of 1 at h 30° or 300° looks the same grey), so a
+    // cast is named only when the reading's own chroma is over the drill's neutral limit.
+    if (!neutral) {
       const cast = nearestHueNeighbour(h);
       feedback.push({
         topic: 'neutrality',
-        severity: neutral ? 'tip' : 'fix',
+        severity: 'fix',
         swatch: m.index,
-        text: aboutSwatch(
-          neutral
-            ? `reads as grey, with a faint ${cast} cast; ${castRemedy[cast]} would settle it`
-            : `still has a ${cast} cast: neutralise it with ${castRemedy[cast]}`,
-          m.index,
-          several,
-        ),
+        text: aboutSwatch(`still has a ${cast} cast: neutralise it with ${castRemedy[cast]}`, m.index, several),
         numbers,
       });
     } else {
@@ -80,7 +77,11 @@ export function gradeNeutral({ targets, readings, tolerance }: GradeInput): Mark
         topic: 'neutrality',
         severity: 'praise',
         swatch: m.index,
-        text: aboutSwatch('a true grey, with no cast to see', m.index, several),
+        text: aboutSwatch(
+          C < 1 ? 'a true grey, with no cast to see' : 'reads as a grey: its colour is within the limit, too slight to name a cast',
+          m.index,
+          several,
+        ),
         numbers,
       });
     }

@@ -32,7 +32,10 @@ export type JudgementThresholds = {
   notice?: number;
   /** For the warm–cool index (default 0.03, see docs/grading.md). */
   warmCool?: number;
-  /** Reference chroma below which it counts as neutral, so any hue is a cast (default 2). */
+  /**
+   * Chroma (C*ab) at or below which a colour counts as neutral (default 2): a neutral reference
+   * makes any visible hue a cast; a neutral sample has no hue to lean.
+   */
   neutralChroma?: number;
 };
 
@@ -81,12 +84,16 @@ export function compareColours(
   const smp = labToLch(sample);
   const deltaWarmCool = warmCoolIndex(sample) - warmCoolIndex(reference);
 
+  // A lean is named only when the hue difference is large enough to see: the ΔE00 hue term at
+  // least `notice` (1 by default, about the threshold of notice; Mixmark's choice). And only
+  // when the sample has a hue at all: with its own chroma under the neutral limit its hue angle
+  // is meaningless (a C* of 0.5 may sit at any angle), whatever the reference.
   let hueLean: HueNeighbour | undefined;
-  if (ref.C < neutralChroma) {
-    // A near-neutral has no hue to keep: any visible chroma is a cast toward its own hue.
-    if (smp.C >= neutralChroma && Math.abs(parts.chromaTerm) >= notice) {
-      hueLean = nearestHueNeighbour(smp.h);
-    }
+  if (smp.C <= neutralChroma) {
+    hueLean = undefined;
+  } else if (ref.C < neutralChroma) {
+    // A near-neutral has no hue to keep: visible chroma is a cast toward the sample's own hue.
+    if (Math.abs(parts.chromaTerm) >= notice) hueLean = nearestHueNeighbour(smp.h);
   } else if (Math.abs(parts.hueTerm) >= notice) {
     hueLean = neighbourToward(smp.h, parts.deltahPrime);
   }
