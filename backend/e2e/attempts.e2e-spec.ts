@@ -131,7 +131,7 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
     const csv = await request(http).get(`/api/classes/${classId}/gradebook.csv`).set(teacher.auth).expect(200);
     expect(csv.headers['content-type']).toMatch(/^text\/csv/);
     expect(csv.headers['content-disposition']).toBe('attachment; filename="gradebook-Saturday-mixing.csv"');
-    expect(csv.text.split('\r\n')[1]).toMatch(/,60,failed$/);
+    expect(csv.text.split('\r\n')[1]).toMatch(/,60,Not passed yet$/);
     await request(http).get(`/api/classes/${classId}/gradebook`).set(otherTeacher.auth).expect(404);
   });
 

@@ -19,7 +19,17 @@ describe('gradebookCsv', () => {
 
   it('should write one row per student and defuse spreadsheet formulas', () => {
     const lines = gradebookCsv(book).trimEnd().split('\r\n');
-    expect(lines[1]).toBe('Ada Quill,ada@studio.test,91,passed');
-    expect(lines[2]).toBe(`"'=HYPERLINK(""x"")",eve@studio.test,,`);
+    expect(lines[1]).toBe('Ada Quill,ada@studio.test,91,Passed');
+    expect(lines[2]).toBe(`"'=HYPERLINK(""x"")",eve@studio.test,,Not started`);
+  });
+
+  it('should write each status in the words the screen uses', () => {
+    const statuses = ['not-started', 'submitted', 'needs-retake', 'passed', 'failed', 'late'] as const;
+    const many: Gradebook = {
+      ...book,
+      students: statuses.map((status, i) => ({ id: `s${i}`, displayName: `Student ${i}`, email: `s${i}@studio.test`, cells: { a1: { status, attempts: 1, latestScore: null, bestScore: null, latestAttemptId: null } } })),
+    };
+    const column = gradebookCsv(many).trimEnd().split('\r\n').slice(1).map((line) => line.split(',').at(-1));
+    expect(column).toEqual(['Not started', 'Being measured', 'Retake the photo', 'Passed', 'Not passed yet', 'Late']);
   });
 });

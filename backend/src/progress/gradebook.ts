@@ -1,3 +1,4 @@
+import { assignmentStatusLabel } from '@mixmark/common';
 import type { AssignmentStatus } from '../assignments/assignment-status';
 
 export interface GradebookCell {
@@ -23,13 +24,14 @@ function csvField(value: unknown): string {
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
-/** The gradebook as CSV: one row per student, best score and status per assignment. */
+/** The gradebook as CSV: one row per student, best score and status (in the screen's words) per assignment. */
 export function gradebookCsv(book: Gradebook): string {
   const header = ['Student', 'E-mail', ...book.assignments.flatMap((a) => [`${a.drillTitle} (due ${a.dueAt.toISOString().slice(0, 10)}) best`, `${a.drillTitle} status`])];
   const rows = book.students.map((s) => [
     s.displayName,
     s.email,
-    ...book.assignments.flatMap((a) => [s.cells[a.id]?.bestScore ?? '', s.cells[a.id]?.status ?? '']),
+    // A student with no cell has handed nothing in: "Not started", as the screen shows it.
+    ...book.assignments.flatMap((a) => [s.cells[a.id]?.bestScore ?? '', assignmentStatusLabel(s.cells[a.id]?.status ?? 'not-started')]),
   ]);
   return [header, ...rows].map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n';
 }

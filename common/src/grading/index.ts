@@ -13,3 +13,4 @@ export * from './grade-neutral.js';
 export * from './grade-graded-wash.js';
 export * from './grade-flat-wash.js';
 export * from './grade-attempt.js';
+export * from './assignment-status-label.js';
