@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import { buildIfStale } from './lib/builds.mjs';
 import { runMain } from './lib/errors.mjs';
 import { waitForOk } from './lib/http.mjs';
+import { serviceNodeFlags } from './lib/node-flags.mjs';
 import { freePort } from './lib/ports.mjs';
 import { run } from './lib/proc.mjs';
 import { rootDir } from './lib/project.mjs';
@@ -32,7 +33,7 @@ runMain(async () => {
       DATABASE_POOL_SIZE: '16', SIGN_IN_LIMIT_PER_MINUTE: '100000', SIGN_IN_IP_LIMIT_PER_MINUTE: '100000',
     };
     await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], { env, capture: true });
-    server = spawn(process.execPath, [join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });
+    server = spawn(process.execPath, [...serviceNodeFlags, join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });
     const base = `http://127.0.0.1:${port}`;
     if (!(await waitForOk(`${base}/api/health`, { child: server }))) throw new Error('the server did not start');
 

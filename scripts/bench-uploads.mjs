@@ -13,6 +13,7 @@ import { buildIfStale } from './lib/builds.mjs';
 import { runMain } from './lib/errors.mjs';
 import { startFakeSmtp } from './lib/fake-smtp.mjs';
 import { waitForOk } from './lib/http.mjs';
+import { serviceNodeFlags } from './lib/node-flags.mjs';
 import { freePort } from './lib/ports.mjs';
 import { run } from './lib/proc.mjs';
 import { rootDir } from './lib/project.mjs';
@@ -39,7 +40,7 @@ function memoryOf(pid) {
 }
 
 function startEntry(entry, env, ready) {
-  const child = spawn(process.execPath, [join(rootDir, 'backend/dist', entry)], { env, stdio: ['ignore', 'pipe', 'inherit'] });
+  const child = spawn(process.execPath, [...serviceNodeFlags, join(rootDir, 'backend/dist', entry)], { env, stdio: ['ignore', 'pipe', 'inherit'] });
   let out = '';
   child.stdout.on('data', (chunk) => (out += chunk));
   return new Promise((resolve, reject) => {

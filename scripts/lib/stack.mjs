@@ -7,6 +7,7 @@ import { assertPortFree, portFromEnv } from './ports.mjs';
 import { ensurePostgresBinaries, PostgresCluster } from './postgres.mjs';
 import { startFakeSmtp } from './fake-smtp.mjs';
 import { run } from './proc.mjs';
+import { serviceNodeFlags } from './node-flags.mjs';
 import { clusterFolders, rootDir } from './project.mjs';
 
 const DATABASE = 'mixmark';
@@ -114,7 +115,7 @@ export class Stack {
         env: { ...process.env, MIXMARK_API_URL: `http://127.0.0.1:${appPort}` },
       });
     } else {
-      server = this.launch('server', [join(rootDir, 'backend', 'dist', 'main.js')], { env, cwd: rootDir });
+      server = this.launch('server', [...serviceNodeFlags, join(rootDir, 'backend', 'dist', 'main.js')], { env, cwd: rootDir });
     }
     const healthy = await waitForOk(`http://127.0.0.1:${appPort}/api/health`, { child: server, timeoutMs: 90000 });
     if (!healthy) throw new SetupError('the server did not answer /api/health in time; its log is above');

@@ -1,6 +1,6 @@
 import { srgb8ToLinearLut } from '@mixmark/common';
 import { solveLinear } from './homography';
-import { fitToneCurve } from './tone-curve';
+import { fitToneCurve, type ToneCurve } from './tone-curve';
 
 /** What the photo shows of one neutral patch: trimmed means in linear light per channel. */
 export type PatchObservation = {
@@ -47,6 +47,9 @@ function fitPlane(points: { x: number; y: number; v: number }[]): LightPlane {
   return s ? [s[0], s[1], s[2]] : [mean, 0, 0];
 }
 
+/** The curve the first pass starts from. */
+const identityCurve: ToneCurve = { at: (o) => o };
+
 /** Rec. 709 / sRGB luminance weights (IEC 61966-2-1). */
 const luma = [0.2126, 0.7152, 0.0722];
 
@@ -72,7 +75,7 @@ export function fitColourCorrection(patches: PatchObservation[]): ColourCorrecti
     [1, 0, 0],
     [1, 0, 0],
   ];
-  let curves = [0, 1, 2].map(() => (o: number) => o);
+  let curves: ToneCurve[] = [identityCurve, identityCurve, identityCurve];
   for (let iteration = 0; iteration < 3; iteration++) {
     curves = [0, 1, 2].map((c) =>
       fitToneCurve(
@@ -82,7 +85,7 @@ export function fitColourCorrection(patches: PatchObservation[]): ColourCorrecti
     );
     light = [0, 1, 2].map((c) => {
       const plane = fitPlane(
-        greys.map((g) => ({ x: g.x, y: g.y, v: curves[c](g.linear[c]) / g.Y })),
+        greys.map((g) => ({ x: g.x, y: g.y, v: curves[c].at(g.linear[c]) / g.Y })),
       );
       const scale = planeAt(plane, mid.x, mid.y);
       return plane.map((v) => v / scale) as LightPlane;
@@ -93,17 +96,17 @@ export function fitColourCorrection(patches: PatchObservation[]): ColourCorrecti
     luma[1] * planeAt(light[1], x, y) +
     luma[2] * planeAt(light[2], x, y);
   const measured = greys.map((g) =>
-    luma.reduce((s, w, c) => s + (w * curves[c](g.linear[c])) / g.Y, 0),
+    luma.reduce((s, w, c) => s + (w * curves[c].at(g.linear[c])) / g.Y, 0),
   );
   const fitted = greys.map((g) => lumaAt(g.x, g.y));
   const scale = measured[0] / fitted[0];
   const nonPlanar = Math.max(...measured.map((m, i) => Math.abs(m / (fitted[i] * scale) - 1)));
   const unevenness = Math.max(...measured) / Math.max(1e-9, Math.min(...measured)) - 1;
-  const tables = [0, 1, 2].map((c) => Float64Array.from(srgb8ToLinearLut, (o) => curves[c](o))) as [
-    Float64Array,
-    Float64Array,
-    Float64Array,
-  ];
+  const tables = curves.map((curve) => {
+    const table = new Float64Array(256);
+    for (let code = 0; code < 256; code++) table[code] = curve.at(srgb8ToLinearLut[code]);
+    return table;
+  }) as [Float64Array, Float64Array, Float64Array];
   return { tables, light, unevenness, nonPlanar };
 }
 

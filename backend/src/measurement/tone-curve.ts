@@ -1,7 +1,12 @@
 import { solveLinear } from './homography';
 
-/** A monotone map from a channel's observed linear value to the reflectance it stands for. */
-export type ToneCurve = (observed: number) => number;
+/** A monotone map from a channel's observed linear value to the reflectance it stands for.
+ * The curves are objects with a method rather than closures made per fit: V8 keeps a
+ * long-lived method's optimised code across full collections (a worker runs about one per
+ * photo), while a per-fit closure's is dropped and compiled again for every photo. */
+export interface ToneCurve {
+  at(observed: number): number;
+}
 
 /** From this many ramp points on (layout v2 has 21 neutrals), the curve is a smoothing fit;
  * below it (v1's nine steps) it interpolates, as a smoother has too little to average. */
@@ -28,7 +33,7 @@ function cubicBasis(t: number): [number, number, number, number] {
  * towards a straight line in log–log (a power law), which a camera's curve is close to; beyond
  * the end knots the curve continues straight with the end slope.
  */
-function fitPSpline(xs: number[], ys: number[], ws: number[]): (x: number) => number {
+function fitPSpline(xs: number[], ys: number[], ws: number[]): SmoothCurve {
   // Eight segments and λ = 0.03 (per unit weight) read best on the accuracy suite among
   // 5–12 segments and λ 0.01–10 (p95 1.99; interpolating the same points: 2.29).
   const segments = 8;
@@ -38,21 +43,17 @@ function fitPSpline(xs: number[], ys: number[], ws: number[]): (x: number) => nu
   const hi = xs[xs.length - 1];
   const step = (hi - lo) / segments;
   const nb = segments + 3;
-  const locate = (x: number): [number, number] => {
-    const f = Math.min(segments - 1e-9, Math.max(0, (x - lo) / step));
-    const j = Math.floor(f);
-    return [j, f - j];
-  };
   const btwb = new Float64Array(nb * nb);
   const btwy = new Float64Array(nb);
-  xs.forEach((x, i) => {
-    const [j, t] = locate(x);
-    const b = cubicBasis(t);
+  for (let i = 0; i < xs.length; i++) {
+    const f = segmentOf(xs[i], lo, step, segments);
+    const j = Math.floor(f);
+    const b = cubicBasis(f - j);
     for (let r = 0; r < 4; r++) {
       btwy[j + r] += ws[i] * b[r] * ys[i];
       for (let c = 0; c < 4; c++) btwb[(j + r) * nb + j + c] += ws[i] * b[r] * b[c];
     }
-  });
+  }
   const wsum = ws.reduce((a, b) => a + b, 0);
   // λ relative to the data's total weight, so the smoothing does not depend on their count.
   const scaledLambda = (lambda * wsum) / xs.length;
@@ -75,28 +76,109 @@ function fitPSpline(xs: number[], ys: number[], ws: number[]): (x: number) => nu
     const solved = solveLinear(m, Float64Array.from(btwy), nb);
     if (!solved) break;
     alpha = solved;
-    const next = Uint8Array.from({ length: nb - 1 }, (_, k) =>
-      alpha[k + 1] < alpha[k] ? 1 : down[k],
-    );
-    if (next.every((v, k) => v === down[k])) break;
+    const next = new Uint8Array(nb - 1);
+    let same = true;
+    for (let k = 0; k + 1 < nb; k++) {
+      next[k] = alpha[k + 1] < alpha[k] ? 1 : down[k];
+      same &&= next[k] === down[k];
+    }
+    if (same) break;
     down = next;
   }
-  const value = (x: number): number => {
-    const [j, t] = locate(x);
-    const b = cubicBasis(t);
-    return b[0] * alpha[j] + b[1] * alpha[j + 1] + b[2] * alpha[j + 2] + b[3] * alpha[j + 3];
-  };
-  // End slopes of the spline (derivative of the uniform cubic B-spline at the end knots).
-  const slopeLo = (alpha[2] - alpha[0]) / (2 * step);
-  const slopeHi = (alpha[nb - 1] - alpha[nb - 3]) / (2 * step);
-  const yLo = value(lo);
-  const yHi = value(hi);
-  return (x: number): number =>
-    x <= lo
-      ? yLo + Math.max(0, slopeLo) * (x - lo)
-      : x >= hi
-        ? yHi + Math.max(0, slopeHi) * (x - hi)
-        : value(x);
+  return new SmoothCurve(lo, hi, step, segments, alpha);
+}
+
+/** Position of x in segments of the uniform knots (clamped to the fitted range). */
+function segmentOf(x: number, lo: number, step: number, segments: number): number {
+  return Math.min(segments - 1e-9, Math.max(0, (x - lo) / step));
+}
+
+/** The P-spline in log–log, continued straight with the end slopes beyond the end knots. */
+class SmoothCurve implements ToneCurve {
+  private readonly slopeLo: number;
+  private readonly slopeHi: number;
+  private readonly yLo: number;
+  private readonly yHi: number;
+
+  constructor(
+    private readonly lo: number,
+    private readonly hi: number,
+    private readonly step: number,
+    private readonly segments: number,
+    private readonly alpha: Float64Array,
+  ) {
+    const nb = alpha.length;
+    // End slopes of the spline (derivative of the uniform cubic B-spline at the end knots).
+    this.slopeLo = Math.max(0, (alpha[2] - alpha[0]) / (2 * step));
+    this.slopeHi = Math.max(0, (alpha[nb - 1] - alpha[nb - 3]) / (2 * step));
+    this.yLo = this.inside(lo);
+    this.yHi = this.inside(hi);
+  }
+
+  /** The spline's value at log x within the knots. */
+  private inside(x: number): number {
+    const f = segmentOf(x, this.lo, this.step, this.segments);
+    const j = Math.floor(f);
+    const b = cubicBasis(f - j);
+    const a = this.alpha;
+    return b[0] * a[j] + b[1] * a[j + 1] + b[2] * a[j + 2] + b[3] * a[j + 3];
+  }
+
+  at(observed: number): number {
+    const x = Math.log(Math.max(observed, 1e-6));
+    const y =
+      x <= this.lo
+        ? this.yLo + this.slopeLo * (x - this.lo)
+        : x >= this.hi
+          ? this.yHi + this.slopeHi * (x - this.hi)
+          : this.inside(x);
+    return Math.exp(y);
+  }
+}
+
+/** Monotone cubic Hermite interpolation in log–log, continued as the end segments' power laws. */
+class HermiteCurve implements ToneCurve {
+  constructor(
+    private readonly xs: number[],
+    private readonly ys: number[],
+    /** Secant slopes of the segments. */
+    private readonly d: number[],
+    /** Tangents at the points (Fritsch–Carlson limited). */
+    private readonly m: number[],
+  ) {}
+
+  at(observed: number): number {
+    const { xs, ys, d, m } = this;
+    const n = xs.length;
+    const x = Math.log(Math.max(observed, 1e-6));
+    if (n === 1) return Math.exp(ys[0]) * (observed / Math.exp(xs[0]));
+    if (x <= xs[0]) return Math.exp(ys[0] + d[0] * (x - xs[0]));
+    if (x >= xs[n - 1]) return Math.exp(ys[n - 1] + d[n - 2] * (x - xs[n - 1]));
+    let i = 0;
+    while (x > xs[i + 1]) i++;
+    const hgt = xs[i + 1] - xs[i];
+    const t = (x - xs[i]) / hgt;
+    const t2 = t * t;
+    const t3 = t2 * t;
+    const y =
+      (2 * t3 - 3 * t2 + 1) * ys[i] +
+      (t3 - 2 * t2 + t) * hgt * m[i] +
+      (-2 * t3 + 3 * t2) * ys[i + 1] +
+      (t3 - t2) * hgt * m[i + 1];
+    return Math.exp(y);
+  }
+}
+
+/** Indices of `values` in ascending order of value, ties in index order (insertion sort: the
+ * ramp has a few dozen points; no comparator closure per call, see `ToneCurve`). */
+function ascendingOrder(values: number[]): number[] {
+  const order: number[] = [];
+  for (let i = 0; i < values.length; i++) {
+    let k = order.length;
+    while (k > 0 && values[order[k - 1]] > values[i]) k--;
+    order.splice(k, 0, i);
+  }
+  return order;
 }
 
 /**
@@ -112,12 +194,12 @@ function fitPSpline(xs: number[], ys: number[], ws: number[]): (x: number) => nu
  * @param truth - the reflectances they should read as (patch Y times the light there)
  * @returns the curve
  * @example
- * fitToneCurve([0.02, 0.2, 0.8], [0.03, 0.18, 1])(0.2); // 0.18
+ * fitToneCurve([0.02, 0.2, 0.8], [0.03, 0.18, 1]).at(0.2); // 0.18
  */
 export function fitToneCurve(observed: number[], truth: number[]): ToneCurve {
   if (observed.length >= smoothingFrom) {
     // Every point counts for the smoother, in order of what was observed.
-    const order = observed.map((_, i) => i).sort((a, b) => observed[a] - observed[b]);
+    const order = ascendingOrder(observed);
     const xs = order.map((i) => Math.log(Math.max(observed[i], 1e-5)));
     const ys = order.map((i) => Math.log(Math.max(truth[i], 1e-6)));
     // Each point's weight: one over the variance of log(observed) from a code value of
@@ -127,10 +209,9 @@ export function fitToneCurve(observed: number[], truth: number[]): ToneCurve {
       const code = 255 * (lin <= 0.0031308 ? 12.92 * lin : 1.055 * lin ** (1 / 2.4) - 0.055);
       return ((code + 14) / 128) ** 2;
     });
-    const f = fitPSpline(xs, ys, ws);
-    return (o: number): number => Math.exp(f(Math.log(Math.max(o, 1e-6))));
+    return fitPSpline(xs, ys, ws);
   }
-  const order = truth.map((_, i) => i).sort((a, b) => truth[a] - truth[b]);
+  const order = ascendingOrder(truth);
   const xs: number[] = [];
   const ys: number[] = [];
   for (const i of order) {
@@ -140,7 +221,7 @@ export function fitToneCurve(observed: number[], truth: number[]): ToneCurve {
     ys.push(Math.log(Math.max(truth[i], 1e-6)));
   }
   const n = xs.length;
-  if (n === 1) return (o) => Math.exp(ys[0]) * (o / Math.exp(xs[0]));
+  if (n === 1) return new HermiteCurve(xs, ys, [], []);
   const d: number[] = [];
   for (let i = 0; i < n - 1; i++) d.push((ys[i + 1] - ys[i]) / (xs[i + 1] - xs[i]));
   const m: number[] = [d[0]];
@@ -161,21 +242,5 @@ export function fitToneCurve(observed: number[], truth: number[]): ToneCurve {
       m[i + 1] = t * b * d[i];
     }
   }
-  return (o: number): number => {
-    const x = Math.log(Math.max(o, 1e-6));
-    if (x <= xs[0]) return Math.exp(ys[0] + d[0] * (x - xs[0]));
-    if (x >= xs[n - 1]) return Math.exp(ys[n - 1] + d[n - 2] * (x - xs[n - 1]));
-    let i = 0;
-    while (x > xs[i + 1]) i++;
-    const hgt = xs[i + 1] - xs[i];
-    const t = (x - xs[i]) / hgt;
-    const t2 = t * t;
-    const t3 = t2 * t;
-    const y =
-      (2 * t3 - 3 * t2 + 1) * ys[i] +
-      (t3 - 2 * t2 + t) * hgt * m[i] +
-      (-2 * t3 + 3 * t2) * ys[i + 1] +
-      (t3 - t2) * hgt * m[i + 1];
-    return Math.exp(y);
-  };
+  return new HermiteCurve(xs, ys, d, m);
 }
