@@ -47,13 +47,19 @@ runMain(async () => {
     const klass = await post('/api/classes', { name: 'Bench class' }, teacher.accessToken);
     const drill = await post('/api/drills', { title: 'Bench grey', kind: 'neutral', targets: [{ lab: { L: 50, a: 0, b: 0 } }] }, teacher.accessToken);
     const db = new pg.Client({ connectionString: env.DATABASE_URL });
+    // A failure below stops the cluster while this client is open: report that failure, not
+    // the client's lost connection.
+    db.on('error', () => {});
     await db.connect();
     // One of the 30 signs in (for the student's own list); the other 29 are written directly.
     const student = await post('/api/auth/register', { email: 'student30@bench.test', password: 'bench password 1', displayName: 'Student 30', role: 'student' });
     await post('/api/classes/join', { code: klass.code }, student.accessToken);
     await db.query(`INSERT INTO users (email, display_name, role, password_hash) SELECT 'student' || i || '@bench.test', 'Student ' || i, 'student', 'x' FROM generate_series(1, 29) i`);
     await db.query(`INSERT INTO class_members (class_id, student_id) SELECT $1, id FROM users WHERE email LIKE 'student%@bench.test' ON CONFLICT DO NOTHING`, [klass.id]);
-    for (let i = 0; i < 12; i += 1) await post('/api/assignments', { classId: klass.id, drillId: drill.id, dueAt: new Date(Date.now() + (i - 6) * 86400000).toISOString() }, teacher.accessToken);
+    // Six past and six due: a new assignment may not be due in the past, so all are made due
+    // ahead and then moved, as a teacher moving due dates would.
+    for (let i = 0; i < 12; i += 1) await post('/api/assignments', { classId: klass.id, drillId: drill.id, dueAt: new Date(Date.now() + (i + 1) * 86400000).toISOString() }, teacher.accessToken);
+    await db.query(`UPDATE assignments SET due_at = due_at - interval '7 days' WHERE class_id = $1`, [klass.id]);
     await db.query(
       `INSERT INTO attempts (student_id, drill_id, assignment_id, state, photo_key, photo_bytes, score, pass, graded_at, created_at)
        SELECT m.student_id, a.drill_id, a.id, 'graded', 'bench', 1, (random() * 100)::int, random() > 0.4, now(), now() - (k || ' days')::interval
