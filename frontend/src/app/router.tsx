@@ -2,6 +2,7 @@ import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { AppLayout } from '@/components/layouts/app-layout';
+import { OutboxLink } from '@/features/outbox/components/outbox-link';
 import { paths } from '@/config/paths';
 import { refreshSession } from '@/lib/api-client';
 import { authStore } from '@/lib/auth-store';
@@ -33,7 +34,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       element: (
         <>
           <NavigationProgress />
-          <AppLayout />
+          <AppLayout footerLinks={<OutboxLink href={paths.devOutbox.getHref()} />} />
         </>
       ),
       errorElement: <RouteError />,
@@ -47,6 +48,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         lazyRoute(paths.auth.forgotPassword.path, () => import('./routes/auth/forgot-password')),
         lazyRoute(paths.auth.resetPassword.path, () => import('./routes/auth/reset-password')),
         lazyRoute(paths.invitation.path, () => import('./routes/invitation')),
+        lazyRoute(paths.devOutbox.path, () => import('./routes/dev/outbox')),
+        lazyRoute(paths.devOutbox.message.path, () => import('./routes/dev/outbox')),
         {
           element: <RequireRole roles={['student']} />,
           children: [

@@ -71,6 +71,15 @@ export const paths = {
       getHref: (assignmentId: string) => `/teacher/assignments/${assignmentId}`,
     },
   },
+  /** The e-mails a development server keeps instead of sending (absent in production). */
+  devOutbox: {
+    path: '/dev/outbox',
+    getHref: () => '/dev/outbox',
+    message: {
+      path: '/dev/outbox/:messageId',
+      getHref: (messageId: string) => `/dev/outbox/${encodeURIComponent(messageId)}`,
+    },
+  },
   admin: { users: { path: '/admin/users', getHref: () => '/admin/users' } },
 } as const;
 

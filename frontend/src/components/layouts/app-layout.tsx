@@ -121,8 +121,11 @@ function RoleNav({ role }: { role: UserRole }) {
   );
 }
 
-/** The frame of every page: a quiet top bar, the role's places, and the page below it. */
-export function AppLayout() {
+/**
+ * The frame of every page: a quiet top bar, the role's places, and the page below it.
+ * `footerLinks` come from the app (such as the development outbox), beside "Server status".
+ */
+export function AppLayout({ footerLinks }: { footerLinks?: ReactNode } = {}) {
   const auth = useAuth();
   const queryClient = useQueryClient();
   const navigate = useNavigate();
@@ -174,9 +177,12 @@ export function AppLayout() {
       </Box>
       <Box component="footer" sx={{ py: 2, borderTop: 1, borderColor: 'divider' }}>
         <Container maxWidth="lg">
-          <Link component={RouterLink} to={paths.status.getHref()} color="text.secondary" variant="body2">
-            Server status
-          </Link>
+          <Stack direction="row" spacing={2} sx={{ flexWrap: 'wrap', gap: 1 }}>
+            <Link component={RouterLink} to={paths.status.getHref()} color="text.secondary" variant="body2">
+              Server status
+            </Link>
+            {footerLinks}
+          </Stack>
         </Container>
       </Box>
     </Box>

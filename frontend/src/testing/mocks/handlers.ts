@@ -9,4 +9,10 @@ export const healthyReply: Health = {
   database: { up: true, latencyMs: 1.4, serverVersion: '15.18', migrationsPending: 0 },
 };
 
-export const handlers = [http.get('*/api/health', () => HttpResponse.json(healthyReply))];
+export const handlers = [
+  http.get('*/api/health', () => HttpResponse.json(healthyReply)),
+  // As in production: no development outbox (tests of the outbox page answer it themselves).
+  http.get('*/api/dev/outbox', () =>
+    HttpResponse.json({ statusCode: 404, code: 'not_found', message: 'Cannot GET /api/dev/outbox' }, { status: 404 }),
+  ),
+];
