@@ -15,7 +15,6 @@ export type InvitationSummary = {
   id: string;
   email: string;
   expiresAt: string;
-  acceptedAt: string | null;
   createdAt: string;
 };
 
