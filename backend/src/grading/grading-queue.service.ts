@@ -47,8 +47,13 @@ export class GradingQueue implements OnModuleInit {
   async work(concurrency: number): Promise<void> {
     const boss = this.requireBoss();
     for (let i = 0; i < concurrency; i += 1) {
-      await boss.work<{ attemptId: string }>(GRADE_ATTEMPT, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, async ([job]) => {
+      let workerId: string | undefined;
+      workerId = await boss.work<{ attemptId: string }>(GRADE_ATTEMPT, { batchSize: 1, includeMetadata: true, pollingIntervalSeconds: 0.5 }, async ([job]) => {
         await this.gradingService.grade(job.data.attemptId, { finalTry: job.retryCount >= job.retryLimit });
+        // pg-boss waits out the polling interval after every fetch, jobs found or not, which
+        // capped each worker at two photos a second (a 12 MP photo takes ~0.2 s). After a job
+        // done, fetch the next at once; an empty queue still waits the interval.
+        if (workerId) boss.notifyWorker(workerId);
       });
     }
   }
