@@ -7,6 +7,7 @@ import { ErrorAlert } from '@/components/ui/error-alert';
 import { Loading } from '@/components/ui/loading';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
+import { AssignmentBrief } from '@/features/assignments/components/assignment-brief';
 import { PhotoUpload } from '@/features/attempts/components/photo-upload';
 import { useDrill } from '@/features/drills/api/get-drill';
 import { PaletteList } from '@/features/drills/components/palette-list';
@@ -43,6 +44,7 @@ export default function StudentDrillRoute() {
             <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
               Send your swatch
             </Typography>
+            {assignmentId && <AssignmentBrief assignmentId={assignmentId} />}
             <Typography variant="body2" sx={{ mb: 2 }}>
               Lay the printed reference card over your dry swatch so it shows through the window.
             </Typography>
