@@ -29,6 +29,9 @@ export interface InvitationPreview {
 const unknownInvitation = () =>
   new NotFoundException({ code: 'invitation_unknown', message: 'This invitation link is not valid. Ask your teacher for a new one.' });
 
+/** The row of a pending (neither accepted nor revoked) invitation of this class. */
+const pendingIn = (classId: string, id: string) => ({ id, classId, acceptedAt: IsNull(), revokedAt: IsNull() });
+
 /** A teacher's route naming an invitation that is not pending in this class. */
 const unknownInvitationRow = () =>
   new NotFoundException({ code: 'invitation_not_found', message: 'There is no pending invitation with this id in this class. Reload the list of invitations.' });
@@ -82,7 +85,7 @@ export class InvitationsService {
     const secret = newSecret();
     const expiresAt = this.freshExpiry();
     const result = await this.invitationsRepository.update(
-      { id: invitationId, classId, acceptedAt: IsNull(), revokedAt: IsNull() },
+      pendingIn(classId, invitationId),
       { tokenHash: hashSecret(secret), expiresAt },
     );
     if (result.affected !== 1) throw unknownInvitationRow();
@@ -95,7 +98,7 @@ export class InvitationsService {
   async revoke(teacher: AuthUser, classId: string, invitationId: string): Promise<void> {
     await this.classesService.findOwned(teacher, classId);
     const result = await this.invitationsRepository.update(
-      { id: invitationId, classId, acceptedAt: IsNull(), revokedAt: IsNull() },
+      pendingIn(classId, invitationId),
       { revokedAt: new Date() },
     );
     if (result.affected !== 1) throw unknownInvitationRow();
@@ -118,9 +121,11 @@ export class InvitationsService {
       { id: invitation.id, tokenHash: invitation.tokenHash, acceptedAt: IsNull(), revokedAt: IsNull() },
       { acceptedAt: new Date(), acceptedById: student.id },
     );
-    // Revoked or re-sent meanwhile: findUsable names which; otherwise it was used just now.
-    if (result.affected !== 1) await this.findUsable(token);
-    if (result.affected !== 1) throw new GoneException({ code: 'invitation_used', message: 'This invitation has already been used.' });
+    if (result.affected !== 1) {
+      // Revoked or re-sent meanwhile: findUsable names which; otherwise it was used just now.
+      await this.findUsable(token);
+      throw new GoneException({ code: 'invitation_used', message: 'This invitation has already been used.' });
+    }
     await this.classesService.addMember(invitation.classId, student.id);
     return this.classesService.findOne(student, invitation.classId);
   }
