@@ -25,6 +25,10 @@ describe('AssignmentBrief', () => {
     expect(await screen.findByText(/Mix it from two paints only\./)).toBeInTheDocument();
     expect(screen.getByText(/Let the wash dry flat\./)).toBeInTheDocument();
     expect(screen.getByText(/Tuesday watercolour: due in \d+ days/)).toBeInTheDocument();
+    // A note, not an alert: the drill page's alerts are kept for what went wrong (WAI-ARIA 1.2,
+    // roles "note" and "alert").
+    expect(screen.getByRole('note', { name: 'From your teacher' })).toBeInTheDocument();
+    expect(screen.queryByRole('alert')).not.toBeInTheDocument();
   });
 
   it('should show only the due date when the teacher left no note', async () => {

@@ -13,7 +13,9 @@ export function AssignmentBrief({ assignmentId }: { assignmentId: string }) {
   if (!assignment.data) return null;
   const { note, className, dueAt } = assignment.data;
   return (
-    <Alert severity="info" icon={false} sx={{ mb: 2 }} aria-label="From your teacher">
+    // role "note": MUI's Alert is role="alert" (announced at once, as for an error); the brief is
+    // standing information, and the page's real alerts (an upload refused) must stay the only ones.
+    <Alert severity="info" icon={false} role="note" sx={{ mb: 2 }} aria-label="From your teacher">
       <Typography variant="body2" sx={{ fontWeight: 700 }}>
         {className}: {dueWords(dueAt)}
       </Typography>
