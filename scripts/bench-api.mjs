@@ -2,7 +2,7 @@
 // the authenticated assignments list and a 30-student gradebook beside the floor (a bare route
 // with one indexed SELECT), all in the same run against the real server and PostgreSQL.
 import { spawn } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { loadavg, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { buildIfStale } from './lib/builds.mjs';
@@ -16,6 +16,36 @@ import { startTestCluster } from './lib/test-cluster.mjs';
 
 const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
 const CONNECTIONS = 32;
+// Extra node flags for the server, e.g. BENCH_SERVER_FLAGS="--cpu-prof --cpu-prof-dir=/tmp/prof"
+// to profile it; BENCH_ROUTES="list" runs only the cases whose name contains one of the words.
+const serverFlags = (process.env.BENCH_SERVER_FLAGS ?? '').split(' ').filter(Boolean);
+const routeFilter = (process.env.BENCH_ROUTES ?? '').split(',').filter(Boolean);
+
+/** CPU time (ms) a process has used so far, from /proc (Linux), or null where it cannot be read. */
+function cpuMs(pid) {
+  try {
+    // Fields after the command name: state is 3rd, utime 14th, stime 15th (proc(5)); ticks of 10 ms.
+    const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  } catch {
+    return null;
+  }
+}
+
+/** CPU time (ms) of a PostgreSQL server and all its backends (processes whose parent it is). */
+function clusterCpuMs(postmasterPid) {
+  let total = cpuMs(postmasterPid) ?? 0;
+  for (const entry of readdirSync('/proc')) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const fields = readFileSync(`/proc/${entry}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
+      if (Number(fields[1]) === postmasterPid) total += (Number(fields[11]) + Number(fields[12])) * 10;
+    } catch {
+      // gone meanwhile
+    }
+  }
+  return total;
+}
 
 runMain(async () => {
   const { default: autocannon } = await import('autocannon');
@@ -33,7 +63,7 @@ runMain(async () => {
       DATABASE_POOL_SIZE: '16', SIGN_IN_LIMIT_PER_MINUTE: '100000', SIGN_IN_IP_LIMIT_PER_MINUTE: '100000',
     };
     await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], { env, capture: true });
-    server = spawn(process.execPath, [...serviceNodeFlags, join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });
+    server = spawn(process.execPath, [...serviceNodeFlags, ...serverFlags, join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });
     const base = `http://127.0.0.1:${port}`;
     if (!(await waitForOk(`${base}/api/health`, { child: server }))) throw new Error('the server did not start');
 
@@ -77,20 +107,31 @@ runMain(async () => {
       // The floor again at the end: the machine is shared, so the baseline is the mean of both.
       { name: 'floor again, at the end', path: '/api/health/db', headers: {} },
     ];
+    const wanted = (c) => routeFilter.length === 0 || c.name.startsWith('floor') || routeFilter.some((word) => c.name.includes(word));
     const results = [];
     const show = (load) => load.map((v) => v.toFixed(2)).join(', ');
     const loadBefore = show(loadavg());
-    for (const c of cases) {
+    const postmasterPid = Number(readFileSync(join(testCluster.cluster.dataDir, 'postmaster.pid'), 'utf8').split('\n')[0]);
+    for (const c of cases.filter(wanted)) {
       await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: 4, duration: 1 }); // warm up
+      const before = { server: cpuMs(server.pid), db: clusterCpuMs(postmasterPid), bench: process.cpuUsage() };
       const r = await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: CONNECTIONS, duration: DURATION });
       if (r.non2xx > 0) throw new Error(`${c.path} answered ${r.non2xx} non-2xx responses`);
-      results.push({ ...c, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99 });
+      const perRequest = (ms) => (ms === null || !r.requests.total ? NaN : (1000 * ms) / r.requests.total);
+      const benchCpu = process.cpuUsage(before.bench);
+      results.push({
+        ...c, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99,
+        serverUs: perRequest(before.server === null ? null : cpuMs(server.pid) - before.server),
+        dbUs: perRequest(clusterCpuMs(postmasterPid) - before.db),
+        benchUs: perRequest((benchCpu.user + benchCpu.system) / 1000),
+      });
     }
     const floor = (results[0].rps + results[results.length - 1].rps) / 2;
     console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s each (one server process, NODE_ENV=production)\n`);
-    console.log('route'.padEnd(64) + 'req/s'.padStart(9) + 'vs floor*'.padStart(10) + 'p50 ms'.padStart(9) + 'p99 ms'.padStart(9));
+    console.log('route'.padEnd(64) + 'req/s'.padStart(9) + 'vs floor*'.padStart(10) + 'p50 ms'.padStart(9) + 'p99 ms'.padStart(9) + '   CPU µs per request: server  PostgreSQL  autocannon');
+    const us = (v) => (Number.isFinite(v) ? v.toFixed(0) : '–');
     for (const r of results) {
-      console.log(r.name.padEnd(64) + r.rps.toFixed(0).padStart(9) + `${((100 * r.rps) / floor).toFixed(0)} %`.padStart(10) + String(r.p50).padStart(9) + String(r.p99).padStart(9));
+      console.log(r.name.padEnd(64) + r.rps.toFixed(0).padStart(9) + `${((100 * r.rps) / floor).toFixed(0)} %`.padStart(10) + String(r.p50).padStart(9) + String(r.p99).padStart(9) + us(r.serverUs).padStart(29) + us(r.dbUs).padStart(12) + us(r.benchUs).padStart(12));
     }
     console.log(`\n* against the mean of the two floor runs, ${floor.toFixed(0)} req/s.`);
     console.log('Aim: the list route at least 70 % of the floor with p99 under 50 ms.');

@@ -103,14 +103,34 @@ describe('auth (e2e, real PostgreSQL)', () => {
   it('should reject missing, tampered and expired access tokens with 401', async () => {
     const { body } = await register().expect(201);
     await request(http).get('/api/auth/me').expect(401);
+    // The genuine token first, twice: the server then knows it as verified (JwtAuthGuard's
+    // VerifiedTokens), and a changed copy must still go through full verification.
+    for (let i = 0; i < 2; i++) await request(http).get('/api/auth/me').set('authorization', `Bearer ${body.accessToken}`).expect(200);
     const [header, payload, signature] = body.accessToken.split('.');
     const forged = Buffer.from(JSON.stringify({ ...JSON.parse(Buffer.from(payload, 'base64url').toString()), role: 'admin' })).toString('base64url');
     await request(http).get('/api/auth/me').set('authorization', `Bearer ${header}.${forged}.${signature}`).expect(401);
+    const otherSignature = `${signature.slice(0, -2)}${signature.endsWith('AA') ? 'BA' : 'AA'}`;
+    await request(http).get('/api/auth/me').set('authorization', `Bearer ${header}.${payload}.${otherSignature}`).expect(401);
+    await request(http).get('/api/admin/users').set('authorization', `Bearer ${header}.${forged}.${signature}`).expect(401);
     const expired = await app.get(JwtService).signAsync(
       { sub: body.user.id, role: 'teacher' },
       { secret: process.env.JWT_SECRET ?? 'mixmark-development-secret-not-for-production-use', expiresIn: -10 },
     );
     const response = await request(http).get('/api/auth/me').set('authorization', `Bearer ${expired}`).expect(401);
+    expect(response.body).toMatchObject({ statusCode: 401, code: 'unauthorized' });
+  });
+
+  it('should refuse an access token once it expires, also after it was accepted', async () => {
+    const { body } = await register().expect(201);
+    const shortLived = await app.get(JwtService).signAsync(
+      { sub: body.user.id, role: 'student' },
+      { secret: process.env.JWT_SECRET ?? 'mixmark-development-secret-not-for-production-use', expiresIn: 1 },
+    );
+    await request(http).get('/api/auth/me').set('authorization', `Bearer ${shortLived}`).expect(200);
+    // RFC 7519 §4.1.4: not accepted on or after `exp` (one whole second after it was issued).
+    const { exp } = JSON.parse(Buffer.from(shortLived.split('.')[1], 'base64url').toString()) as { exp: number };
+    await new Promise((resolve) => setTimeout(resolve, Math.max(0, exp * 1000 - Date.now()) + 50));
+    const response = await request(http).get('/api/auth/me').set('authorization', `Bearer ${shortLived}`).expect(401);
     expect(response.body).toMatchObject({ statusCode: 401, code: 'unauthorized' });
   });
 

