@@ -1,5 +1,6 @@
 import type { Raster8 } from '@mixmark/common';
 import sharp from 'sharp';
+import { chromaLatticeOf, type ChromaLattice } from './jpeg-lattice';
 import { PhotoFileError } from './measurement-issue';
 
 /** Input limits that stop decompression bombs and oversized uploads before decoding. */
@@ -25,6 +26,9 @@ export type DecodedPhoto = {
   width: number;
   height: number;
   format: 'jpeg' | 'png' | 'webp';
+  /** For a JPEG whose decoded YCbCr reaches the raster untouched: its chroma DC lattice
+   * (flat areas are snapped to it, `jpeg-lattice.ts`); otherwise why not. */
+  chroma: { lattice: ChromaLattice } | { skipped: string };
 };
 
 type Sniffed = 'jpeg' | 'png' | 'webp' | 'heic' | 'avif' | 'gif' | 'tiff' | 'bmp' | undefined;
@@ -105,6 +109,7 @@ export async function checkPhoto(bytes: Buffer, limits: PhotoLimits = defaultPho
   const turned = (meta.orientation ?? 1) >= 5;
   return {
     type,
+    hasProfile: Boolean(meta.hasProfile),
     width: turned ? meta.height! : meta.width!,
     height: turned ? meta.width! : meta.height!,
   };
@@ -129,7 +134,7 @@ export async function decodePhoto(
   options: { limits?: PhotoLimits; maxSide?: number } = {},
 ): Promise<DecodedPhoto> {
   const limits = options.limits ?? defaultPhotoLimits;
-  const { type, width, height } = await checkPhoto(bytes, limits);
+  const { type, width, height, hasProfile } = await checkPhoto(bytes, limits);
   const maxSide = options.maxSide ?? 2048;
   let factor = 1;
   while (Math.max(width, height) / factor > maxSide) factor *= 2;
@@ -158,6 +163,11 @@ export async function decodePhoto(
       width,
       height,
       format: type,
+      // The decode keeps a flat area's chroma as the file's (EXIF rotation moves pixels, the
+      // shrink on load decodes whole blocks at a smaller IDCT size, which keeps a DC-only
+      // block one value, and the linear resize after it averages values that are equal);
+      // an embedded profile's conversion to sRGB would not, so the lattice is then not used.
+      chroma: type === 'jpeg' ? chromaLatticeOf(bytes, hasProfile) : { skipped: type },
     };
   } catch (error) {
     const text = error instanceof Error ? error.message : String(error);

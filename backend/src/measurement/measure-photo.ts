@@ -10,8 +10,9 @@ import { edgeWidthMm } from './edge-width';
 import { findCard, type CardDetection } from './find-card';
 import { applyHomography } from './homography';
 import { issue } from './issue-messages';
+import { latticeShift, shiftedTable } from './jpeg-lattice';
 import { PhotoFileError, type MeasurementIssue } from './measurement-issue';
-import { readWindow, type WindowReading } from './read-window';
+import { readWindow, type CodeShift, type WindowReading } from './read-window';
 import { kthSmallest, trimmedMeanOfCodes } from './robust-statistics';
 import { scratchF64 } from './scratch';
 import { insetRect, pixelsPerMm, sampleCardRect, type CardSamples } from './sample-card';
@@ -90,12 +91,18 @@ const clipped = (s: CardSamples): number => {
   return count / n;
 };
 
-function observePatch(samples: CardSamples): [number, number, number] {
-  return [0, 1, 2].map((c) => trimmedMeanOfCodes(samples.codes, c, 3, srgb8ToLinearLut, 0.1)) as [
-    number,
-    number,
-    number,
-  ];
+function observePatch(samples: CardSamples, shift?: CodeShift): [number, number, number] {
+  return [0, 1, 2].map((c) =>
+    trimmedMeanOfCodes(
+      samples.codes,
+      c,
+      3,
+      shift
+        ? shiftedTable(srgb8ToLinearLut, shift[c], scratchF64('patch-table', 256))
+        : srgb8ToLinearLut,
+      0.1,
+    ),
+  ) as [number, number, number];
 }
 
 const centre = (r: MmRect): [number, number] => [r.x + r.w / 2, r.y + r.h / 2];
@@ -225,9 +232,15 @@ export function measureDecoded(
   });
   if (errors.length) return done(summarise(detection, photo), [], detection);
 
+  // A flat patch's or window's chroma is snapped to the JPEG's own DC lattice when the file
+  // allows it (jpeg-lattice.ts): the decoder's roundings of it are then not read as colour.
+  const lattice = 'lattice' in photo.chroma ? photo.chroma.lattice : undefined;
+  const shiftOf = (s: CardSamples): CodeShift | undefined =>
+    lattice ? latticeShift(s.codes, lattice) : undefined;
   const observations: PatchObservation[] = layout.patches.map((p, i) => {
     const [x, y] = centre(p);
-    return { name: p.name, role: p.role, Y: p.Y, x, y, linear: observePatch(patchSamples[i]) };
+    const linear = observePatch(patchSamples[i], shiftOf(patchSamples[i]));
+    return { name: p.name, role: p.role, Y: p.Y, x, y, linear };
   });
   const correction = fitColourCorrection(observations);
   timings.fit = performance.now() - t;
@@ -270,7 +283,7 @@ export function measureDecoded(
   const readings: WindowReading[] = [];
   windowSamples.forEach((samples, i) => {
     const share = clipped(samples);
-    const reading = readWindow(samples, correction, i);
+    const reading = readWindow(samples, correction, i, shiftOf(samples));
     const hot = hotShare(samples, correction);
     if (share > gateLimits.glareError || hot > gateLimits.hotError) {
       errors.push(issue('GLARE', `It is on window ${i + 1}.`, i));

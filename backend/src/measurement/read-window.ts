@@ -11,6 +11,7 @@ import {
   type LabSpread,
 } from '@mixmark/common';
 import { lightAt, type ColourCorrection } from './colour-correction';
+import { shiftedTable } from './jpeg-lattice';
 import { quantile, quantiles } from './robust-statistics';
 import { scratchF64 } from './scratch';
 import type { CardSamples } from './sample-card';
@@ -30,14 +31,26 @@ export type WindowReading = {
   pixels: number;
 };
 
+/** Camera codes to add per channel before correcting (a flat area's JPEG chroma lattice
+ * snap, `latticeShift`). */
+export type CodeShift = readonly [number, number, number];
+
 /** Per-sample corrected linear RGB (reflectance) and luminance, in scratch arrays that the
- * next call reuses. */
-export function correctSamples(samples: CardSamples, correction: ColourCorrection) {
+ * next call reuses; with `shift`, each code is read as code + shift (interpolated table). */
+export function correctSamples(
+  samples: CardSamples,
+  correction: ColourCorrection,
+  shift?: CodeShift,
+) {
   const { nx, ny, rect, codes } = samples;
   const n = nx * ny;
   const rgb = scratchF64('window-rgb', n * 3);
   const Y = scratchF64('window-Y', n);
-  const [tr, tg, tb] = correction.tables;
+  const [tr, tg, tb] = shift
+    ? correction.tables.map((t, c) =>
+        shiftedTable(t, shift[c], scratchF64(`window-table-${c}`, 256)),
+      )
+    : correction.tables;
   const [lr, lg, lb] = correction.light;
   const sx = rect.w / nx;
   let k = 0;
@@ -78,14 +91,16 @@ const spreadSampleLimit = 4096;
  * @param samples - samples inside the inset window
  * @param correction - the fitted correction
  * @param window - the window's index
+ * @param shift - codes to add per channel first (a flat area's JPEG lattice snap), if any
  * @returns the reading
  */
 export function readWindow(
   samples: CardSamples,
   correction: ColourCorrection,
   window: number,
+  shift?: CodeShift,
 ): WindowReading {
-  const { rgb, Y } = correctSamples(samples, correction);
+  const { rgb, Y } = correctSamples(samples, correction, shift);
   const n = Y.length;
   const [low, high] = quantiles(Y, [0.1, 0.9]);
   let sr = 0;
