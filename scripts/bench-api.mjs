@@ -16,8 +16,10 @@ import { startTestCluster } from './lib/test-cluster.mjs';
 
 const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
 const CONNECTIONS = 32;
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 2);
 // Extra node flags for the server, e.g. BENCH_SERVER_FLAGS="--cpu-prof --cpu-prof-dir=/tmp/prof"
-// to profile it; BENCH_ROUTES="list" runs only the cases whose name contains one of the words.
+// to profile it; BENCH_ROUTES="list" runs only the routes whose name contains one of the words;
+// BENCH_ROUNDS (default 2) how often each route is run, between floor runs.
 const serverFlags = (process.env.BENCH_SERVER_FLAGS ?? '').split(' ').filter(Boolean);
 const routeFilter = (process.env.BENCH_ROUTES ?? '').split(',').filter(Boolean);
 
@@ -99,41 +101,57 @@ runMain(async () => {
     await db.end();
 
     const auth = { authorization: `Bearer ${teacher.accessToken}` };
-    const cases = [
-      { name: 'floor: one indexed SELECT (GET /api/health/db)', path: '/api/health/db', headers: {} },
+    const floorCase = { name: 'floor: one indexed SELECT (GET /api/health/db)', path: '/api/health/db', headers: {} };
+    const routes = [
       { name: 'assignments list, signed in (GET /api/assignments)', path: '/api/assignments', headers: auth },
       { name: 'gradebook, 30 students x 12 (GET /api/classes/:id/gradebook)', path: `/api/classes/${klass.id}/gradebook`, headers: auth },
       { name: "a student's own list (GET /api/assignments)", path: '/api/assignments', headers: { authorization: `Bearer ${student.accessToken}` } },
-      // The floor again at the end: the machine is shared, so the baseline is the mean of both.
-      { name: 'floor again, at the end', path: '/api/health/db', headers: {} },
-    ];
-    const wanted = (c) => routeFilter.length === 0 || c.name.startsWith('floor') || routeFilter.some((word) => c.name.includes(word));
-    const results = [];
+    ].filter((c) => routeFilter.length === 0 || routeFilter.some((word) => c.name.includes(word)));
     const show = (load) => load.map((v) => v.toFixed(2)).join(', ');
     const loadBefore = show(loadavg());
     const postmasterPid = Number(readFileSync(join(testCluster.cluster.dataDir, 'postmaster.pid'), 'utf8').split('\n')[0]);
-    for (const c of cases.filter(wanted)) {
-      await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: 4, duration: 1 }); // warm up
+    let warmUpSeconds = 3; // the first run: the server's code is not compiled yet
+    const measure = async (c) => {
+      await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: 4, duration: warmUpSeconds });
+      warmUpSeconds = 1;
       const before = { server: cpuMs(server.pid), db: clusterCpuMs(postmasterPid), bench: process.cpuUsage() };
       const r = await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: CONNECTIONS, duration: DURATION });
       if (r.non2xx > 0) throw new Error(`${c.path} answered ${r.non2xx} non-2xx responses`);
       const perRequest = (ms) => (ms === null || !r.requests.total ? NaN : (1000 * ms) / r.requests.total);
       const benchCpu = process.cpuUsage(before.bench);
-      results.push({
-        ...c, rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99,
+      return {
+        rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99,
         serverUs: perRequest(before.server === null ? null : cpuMs(server.pid) - before.server),
         dbUs: perRequest(clusterCpuMs(postmasterPid) - before.db),
         benchUs: perRequest((benchCpu.user + benchCpu.system) / 1000),
-      });
+      };
+    };
+    // The machine is shared and its speed drifts over seconds: the floor is run before each
+    // round and once more at the end, and each route is set against the mean of the two floor
+    // runs around it, in every round.
+    const floors = [await measure(floorCase)];
+    const byRoute = routes.map(() => []);
+    for (let round = 0; round < ROUNDS; round++) {
+      const runs = [];
+      for (const c of routes) runs.push(await measure(c));
+      floors.push(await measure(floorCase));
+      const around = (floors.at(-2).rps + floors.at(-1).rps) / 2;
+      runs.forEach((run, i) => byRoute[i].push({ ...run, share: run.rps / around }));
     }
-    const floor = (results[0].rps + results[results.length - 1].rps) / 2;
-    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s each (one server process, NODE_ENV=production)\n`);
-    console.log('route'.padEnd(64) + 'req/s'.padStart(9) + 'vs floor*'.padStart(10) + 'p50 ms'.padStart(9) + 'p99 ms'.padStart(9) + '   CPU µs per request: server  PostgreSQL  autocannon');
+    const mean = (values) => values.reduce((sum, v) => sum + v, 0) / values.length;
     const us = (v) => (Number.isFinite(v) ? v.toFixed(0) : '–');
-    for (const r of results) {
-      console.log(r.name.padEnd(64) + r.rps.toFixed(0).padStart(9) + `${((100 * r.rps) / floor).toFixed(0)} %`.padStart(10) + String(r.p50).padStart(9) + String(r.p99).padStart(9) + us(r.serverUs).padStart(29) + us(r.dbUs).padStart(12) + us(r.benchUs).padStart(12));
-    }
-    console.log(`\n* against the mean of the two floor runs, ${floor.toFixed(0)} req/s.`);
+    const pct = (v) => `${(100 * v).toFixed(0)} %`;
+    const line = (name, runs, share) =>
+      name.padEnd(62) + mean(runs.map((r) => r.rps)).toFixed(0).padStart(7) + share.padStart(17) +
+      String(Math.max(...runs.map((r) => r.p50))).padStart(8) + String(Math.max(...runs.map((r) => r.p99))).padStart(8) +
+      us(mean(runs.map((r) => r.serverUs))).padStart(9) + us(mean(runs.map((r) => r.dbUs))).padStart(8) + us(mean(runs.map((r) => r.benchUs))).padStart(8);
+    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s a run, ${ROUNDS} rounds (one server process, NODE_ENV=production)\n`);
+    console.log(''.padEnd(62) + ''.padStart(7) + 'vs floor*'.padStart(17) + 'worst of the runs'.padStart(18) + 'CPU µs per request'.padStart(25));
+    console.log('route'.padEnd(62) + 'req/s'.padStart(7) + '(each round)'.padStart(17) + 'p50 ms'.padStart(8) + 'p99 ms'.padStart(8) + 'server'.padStart(9) + 'db'.padStart(8) + 'bench'.padStart(8));
+    console.log(line(`${floorCase.name}, ${floors.length} runs`, floors, floors.map((f) => f.rps.toFixed(0)).join('/')));
+    routes.forEach((c, i) => console.log(line(c.name, byRoute[i], `${pct(mean(byRoute[i].map((r) => r.share)))} (${byRoute[i].map((r) => pct(r.share).replace(' ', '')).join(' ')})`)));
+    console.log('\n* each round against the mean of the floor runs before and after it; the figure is the mean of the rounds.');
+    console.log('db: PostgreSQL (server and backends); bench: autocannon, in this process. Both share the two cores with the server.');
     console.log('Aim: the list route at least 70 % of the floor with p99 under 50 ms.');
     console.log(`Load average (1, 5, 15 min) before ${loadBefore}, after ${show(loadavg())} (2 shared cores: compare with the floor of the same run).`);
   } finally {
