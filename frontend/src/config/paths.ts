@@ -16,7 +16,8 @@ export const paths = {
     },
     register: {
       path: '/register',
-      getHref: (redirectTo?: string) => withQuery('/register', { redirectTo }),
+      /** `email` fills in the form's address (an invitation link passes the invited one). */
+      getHref: (redirectTo?: string, email?: string) => withQuery('/register', { redirectTo, email }),
     },
     forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
     resetPassword: {

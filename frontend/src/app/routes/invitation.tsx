@@ -20,12 +20,12 @@ export default function InvitationRoute() {
         token={token}
         canAccept={isStudent}
         onAccepted={() => navigate(paths.student.assignments.getHref())}
-        signInAction={
+        signInAction={({ email }) =>
           auth.status === 'signed-in' ? (
             <Typography>Invitations are for student accounts; you are signed in as a {auth.user.role}.</Typography>
           ) : (
             <Stack direction="row" spacing={1}>
-              <Button variant="contained" component={RouterLink} to={paths.auth.register.getHref(here)}>
+              <Button variant="contained" component={RouterLink} to={paths.auth.register.getHref(here, email)}>
                 Create a student account
               </Button>
               <Button variant="outlined" component={RouterLink} to={paths.auth.signIn.getHref(here)}>

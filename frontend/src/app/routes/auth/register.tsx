@@ -23,6 +23,7 @@ export default function RegisterRoute() {
     >
       <RegisterForm
         defaultRole={search.get('role') === 'teacher' ? 'teacher' : 'student'}
+        defaultEmail={search.get('email') ?? undefined}
         onSuccess={after.go}
       />
     </AuthCard>

@@ -1,4 +1,5 @@
 import Button from '@mui/material/Button';
+import Divider from '@mui/material/Divider';
 import Grid from '@mui/material/Grid';
 import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
@@ -13,11 +14,13 @@ import { useClass } from '@/features/classes/api/get-class';
 import { ClassCodePanel } from '@/features/classes/components/class-code-panel';
 import { ClassSettings } from '@/features/classes/components/class-settings';
 import { InviteForm } from '@/features/classes/components/invite-form';
+import { PendingInvitations } from '@/features/classes/components/pending-invitations';
 import { RosterTable } from '@/features/classes/components/roster-table';
 import { useClassProgress } from '@/features/progress/api/get-class-progress';
 import { ProgressSummary } from '@/features/progress/components/progress-summary';
 import { getAssignmentsQueryOptions } from '@/features/assignments/api/get-assignments';
 import { getClassQueryOptions } from '@/features/classes/api/get-class';
+import { getInvitationsQueryOptions } from '@/features/classes/api/get-invitations';
 import { getRosterQueryOptions } from '@/features/classes/api/get-roster';
 import { getClassProgressQueryOptions } from '@/features/progress/api/get-class-progress';
 import { prefetchLoader } from '@/lib/route-loader';
@@ -25,7 +28,8 @@ import { prefetchLoader } from '@/lib/route-loader';
 function ClassProgress({ classId }: { classId: string }) {
   const progress = useClassProgress({ id: classId });
   if (progress.isPending) return <Loading label="Loading the class's progress…" />;
-  if (progress.isError) return <ErrorAlert error={progress.error} onRetry={() => progress.refetch()} />;
+  if (progress.isError)
+    return <ErrorAlert error={progress.error} onRetry={() => progress.refetch()} />;
   return <ProgressSummary progress={progress.data} who="class" />;
 }
 
@@ -42,10 +46,18 @@ export default function TeacherClassRoute() {
         subtitle={`${data.studentCount} ${data.studentCount === 1 ? 'student' : 'students'}${data.archived ? ' · archived' : ''}`}
         actions={
           <>
-            <Button variant="outlined" component={RouterLink} to={paths.teacher.gradebook.getHref(data.id)}>
+            <Button
+              variant="outlined"
+              component={RouterLink}
+              to={paths.teacher.gradebook.getHref(data.id)}
+            >
               Gradebook
             </Button>
-            <Button variant="contained" component={RouterLink} to={paths.teacher.assign.getHref({ classId: data.id })}>
+            <Button
+              variant="contained"
+              component={RouterLink}
+              to={paths.teacher.assign.getHref({ classId: data.id })}
+            >
               Assign a drill
             </Button>
           </>
@@ -58,7 +70,10 @@ export default function TeacherClassRoute() {
               <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
                 Assignments
               </Typography>
-              <TeacherAssignmentList classId={data.id} assignmentHref={paths.teacher.assignment.getHref} />
+              <TeacherAssignmentList
+                classId={data.id}
+                assignmentHref={paths.teacher.assignment.getHref}
+              />
             </section>
             <section>
               <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
@@ -82,6 +97,8 @@ export default function TeacherClassRoute() {
                 Invite students
               </Typography>
               <InviteForm classId={data.id} />
+              <Divider sx={{ my: 2 }} />
+              <PendingInvitations classId={data.id} />
             </Paper>
             <Paper sx={{ p: 2 }}>
               <Typography variant="h3" component="h2" sx={{ mb: 1.5 }}>
@@ -104,5 +121,6 @@ export const loader = prefetchLoader(['teacher'], (queryClient, { params }) => {
     queryClient.ensureQueryData(getRosterQueryOptions(classId)),
     queryClient.ensureQueryData(getAssignmentsQueryOptions({ classId })),
     queryClient.ensureQueryData(getClassProgressQueryOptions(classId)),
+    queryClient.ensureQueryData(getInvitationsQueryOptions(classId)),
   ];
 });

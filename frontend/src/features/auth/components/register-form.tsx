@@ -17,19 +17,24 @@ import { useRegister } from '../api/register';
 import { FormAlert } from './form-alert';
 
 /** The shared schema, loaded when the form is first used (see lib/lazy-resolver.ts). */
-const resolver = lazyYupResolver<RegisterInput>(() => import('../schemas').then((m) => m.registerSchema));
+const resolver = lazyYupResolver<RegisterInput>(() =>
+  import('../schemas').then((m) => m.registerSchema),
+);
 
 export function RegisterForm({
   defaultRole = 'student',
+  defaultEmail = '',
   onSuccess,
 }: {
   defaultRole?: RegisterInput['role'];
+  /** Filled in, still editable (an invitation link passes the address it was sent to). */
+  defaultEmail?: string;
   onSuccess: (session: SessionReply) => void;
 }) {
   const [formError, setFormError] = useState<string>();
   const form = useForm<RegisterInput>({
     resolver,
-    defaultValues: { role: defaultRole, displayName: '', email: '', password: '' },
+    defaultValues: { role: defaultRole, displayName: '', email: defaultEmail, password: '' },
   });
   const registerAccount = useRegister({ onSuccess });
   const { errors } = form.formState;
@@ -45,7 +50,13 @@ export function RegisterForm({
   });
 
   return (
-    <Stack component="form" spacing={2} noValidate onSubmit={onSubmit} onFocus={() => void resolver.preload()}>
+    <Stack
+      component="form"
+      spacing={2}
+      noValidate
+      onSubmit={onSubmit}
+      onFocus={() => void resolver.preload()}
+    >
       <FormAlert message={formError ?? errors.root?.message} />
       <FormControl error={Boolean(errors.role)}>
         <FormLabel id="register-role">I am joining as</FormLabel>
@@ -54,7 +65,11 @@ export function RegisterForm({
           control={form.control}
           render={({ field }) => (
             <RadioGroup row aria-labelledby="register-role" {...field}>
-              <FormControlLabel value="student" control={<Radio />} label="A student or self-learner" />
+              <FormControlLabel
+                value="student"
+                control={<Radio />}
+                label="A student or self-learner"
+              />
               <FormControlLabel value="teacher" control={<Radio />} label="A teacher" />
             </RadioGroup>
           )}
@@ -66,7 +81,9 @@ export function RegisterForm({
         autoComplete="name"
         {...form.register('displayName')}
         error={Boolean(errors.displayName)}
-        helperText={fieldHelp('displayName', errors.displayName) ?? 'Shown to your teacher or students.'}
+        helperText={
+          fieldHelp('displayName', errors.displayName) ?? 'Shown to your teacher or students.'
+        }
       />
       <TextField
         label="E-mail"
@@ -74,7 +91,12 @@ export function RegisterForm({
         autoComplete="email"
         {...form.register('email')}
         error={Boolean(errors.email)}
-        helperText={fieldHelp('email', errors.email)}
+        helperText={
+          fieldHelp('email', errors.email) ??
+          (defaultEmail
+            ? 'The address your invitation was sent to; you may use another one.'
+            : undefined)
+        }
       />
       <TextField
         label="Password"

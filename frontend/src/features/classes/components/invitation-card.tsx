@@ -7,7 +7,7 @@ import { Loading } from '@/components/ui/loading';
 import { errorMessage } from '@/lib/error-words';
 import { useAcceptInvitation } from '../api/accept-invitation';
 import { useInvitation } from '../api/get-invitation';
-import type { ClassSummary } from '../types';
+import type { ClassSummary, InvitationPreview } from '../types';
 
 /**
  * What an invitation link is for, and the button to accept it. `canAccept` is false when the
@@ -21,7 +21,8 @@ export function InvitationCard({
 }: {
   token: string;
   canAccept: boolean;
-  signInAction?: React.ReactNode;
+  /** Given the invitation, so a "create an account" link can carry the invited address. */
+  signInAction?: (invitation: InvitationPreview) => React.ReactNode;
   onAccepted: (joined: ClassSummary) => void;
 }) {
   const invitation = useInvitation({ token });
@@ -36,7 +37,8 @@ export function InvitationCard({
         <strong>{className}</strong>.
       </Typography>
       <Typography color="text.secondary">
-        The link works until {new Date(expiresAt).toLocaleDateString(undefined, { dateStyle: 'long' })}.
+        The link works until{' '}
+        {new Date(expiresAt).toLocaleDateString(undefined, { dateStyle: 'long' })}.
       </Typography>
       {accept.isError && <Alert severity="error">{errorMessage(accept.error)}</Alert>}
       {canAccept ? (
@@ -44,7 +46,7 @@ export function InvitationCard({
           Join {className}
         </Button>
       ) : (
-        signInAction
+        signInAction?.(invitation.data)
       )}
     </Stack>
   );
