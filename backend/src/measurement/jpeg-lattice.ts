@@ -246,12 +246,12 @@ export const flatShare = 0.9;
  * holds: its decoded Cb, Cr (one integer pair over the area) snapped to the file's DC lattice,
  * and the decoder's fixed-point conversion replaced by the exact JFIF one. Y is left as
  * decoded (noise dithers it). Undefined when the area is not flat in chroma (fewer than
- * `flatShare` of the samples unclipped and on one Cb, Cr pair) or its pair is not on the
- * lattice at exactly one point.
+ * `flatShare` of the samples unclipped and on one Cb, Cr pair, i.e. one R − G, B − G) or
+ * its pair is not on the lattice at exactly one point.
  *
- * Per sample, round(Cb(R, G, B)) gives back the decoder's integer Cb exactly: the conversion's
- * roundings move the JFIF forward Cb, Cr by at most 0.495 code over all 65,536 pairs
- * (checked in the spec), and Y cancels out of both.
+ * round(Cb(R, G, B)) gives back the decoder's integer Cb exactly: the conversion's roundings
+ * move the JFIF forward Cb, Cr by at most 0.495 code over all 65,536 pairs (checked in the
+ * spec), and Y cancels out of both, so one pair has one (R − G, B − G) and the reverse.
  *
  * @param codes - RGB codes, three per sample
  * @param lattice - the file's chroma lattice
@@ -262,30 +262,37 @@ export function latticeShift(
   lattice: ChromaLattice,
 ): [number, number, number] | undefined {
   const n = Math.floor(codes.length / 3);
-  let unclipped = 0;
-  let sumCb = 0;
-  let sumCr = 0;
+  if (n === 0) return undefined;
+  // In one decoded flat area (R − G, B − G) are the same integers in every pixel, and they
+  // fix Cb and Cr (below): a majority vote over them (Boyer and Moore's; any value held by
+  // over half the samples wins) and a count of the winner tell flatness in two integer passes.
+  let candidate = -1;
+  let votes = 0;
   for (let k = 0; k < 3 * n; k += 3) {
     const r = codes[k];
     const g = codes[k + 1];
     const b = codes[k + 2];
     if (r === 0 || g === 0 || b === 0 || r === 255 || g === 255 || b === 255) continue;
-    unclipped++;
-    sumCb += cbOf(r, g, b);
-    sumCr += crOf(r, g, b);
+    const key = (r - g + 256) * 512 + (b - g + 256);
+    if (votes === 0) {
+      candidate = key;
+      votes = 1;
+    } else votes += key === candidate ? 1 : -1;
   }
-  if (n === 0 || unclipped < flatShare * n) return undefined;
-  const cb = Math.round(sumCb / unclipped);
-  const cr = Math.round(sumCr / unclipped);
   let agree = 0;
   for (let k = 0; k < 3 * n; k += 3) {
     const r = codes[k];
     const g = codes[k + 1];
     const b = codes[k + 2];
     if (r === 0 || g === 0 || b === 0 || r === 255 || g === 255 || b === 255) continue;
-    if (Math.round(cbOf(r, g, b)) === cb && Math.round(crOf(r, g, b)) === cr) agree++;
+    if ((r - g + 256) * 512 + (b - g + 256) === candidate) agree++;
   }
   if (agree < flatShare * n) return undefined;
+  const rg = Math.floor(candidate / 512) - 256;
+  const bg = (candidate % 512) - 256;
+  // cbOf and crOf of any R, G, B with these differences (their weights sum to 0).
+  const cb = Math.round(cbOf(rg, 0, bg));
+  const cr = Math.round(crOf(rg, 0, bg));
   const cbFile = latticePointFor(cb, lattice.cbQ);
   const crFile = latticePointFor(cr, lattice.crQ);
   if (cbFile === undefined || crFile === undefined) return undefined;
