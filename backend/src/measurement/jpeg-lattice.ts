@@ -237,7 +237,10 @@ export const crOf = (r: number, g: number, b: number): number =>
  * chroma. If a tenth of the samples sat one lattice step s from the rest, the area's true mean
  * would be at most 0.1·s ≈ 0.1–0.2 code from the majority's lattice point, below the 0.29
  * code RMS of the whole-code rounding that the snap removes; more disagreement and the mean is
- * left as it is (the chroma is then dithered, or the area is textured).
+ * left as it is (the chroma is then dithered, or the area is textured). (A minority on the
+ * next point also says the true chroma is near the boundary between the two, up to half a
+ * step from the majority's; averaging each sample's own point instead was tried and read
+ * the same within chance, docs/measurement.md.)
  */
 export const flatShare = 0.9;
 
