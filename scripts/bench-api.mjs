@@ -62,7 +62,7 @@ runMain(async () => {
     const env = {
       ...process.env, NODE_ENV: 'production', LOG_LEVEL: 'warn', DATABASE_URL: testCluster.cluster.url('bench'), PORT: String(port),
       JWT_SECRET: 'bench-secret-bench-secret-bench-secret-0001', STORAGE_DIR: storage, SMTP_URL: 'smtp://127.0.0.1:9', GRADING_IN_SERVER: 'false',
-      DATABASE_POOL_SIZE: '16', SIGN_IN_LIMIT_PER_MINUTE: '100000', SIGN_IN_IP_LIMIT_PER_MINUTE: '100000',
+      DATABASE_POOL_SIZE: process.env.BENCH_POOL_SIZE ?? '16', SIGN_IN_LIMIT_PER_MINUTE: '100000', SIGN_IN_IP_LIMIT_PER_MINUTE: '100000',
     };
     await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], { env, capture: true });
     server = spawn(process.execPath, [...serviceNodeFlags, ...serverFlags, join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });

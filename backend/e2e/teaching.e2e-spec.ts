@@ -133,6 +133,24 @@ describe('classes, invitations, drills and assignments (e2e, real PostgreSQL and
     await request(http).get('/api/assignments').set(outsider.auth).expect(200).expect([]);
   });
 
+  it('should send the same assignment in the list as on its own, whatever its note holds', async () => {
+    // The list's JSON is written by PostgreSQL (json_build_object) and the single assignment is
+    // serialised by Nest: both must read the same, also for text JSON must escape (RFC 8259 §7).
+    const note = 'Say "wet-in-wet" \\ not \\n; tab\there,\nnew line, café, 水彩, 🎨, </script>, \u0001.';
+    const due = new Date(Date.now() + 9 * 86_400_000).toISOString();
+    const made = await request(http).post('/api/assignments').set(teacher.auth).send({ classId, drillId, dueAt: due, note }).expect(201);
+    expect(made.body.note).toBe(note);
+    const list = await request(http).get(`/api/assignments?classId=${classId}`).set(teacher.auth).expect(200).expect('content-type', /^application\/json/);
+    const one = await request(http).get(`/api/assignments/${made.body.id}`).set(teacher.auth).expect(200);
+    expect(list.body.find((a: { id: string }) => a.id === made.body.id)).toEqual(one.body);
+    expect(one.body).toEqual(made.body);
+    const mine = await request(http).get('/api/assignments').set(student.auth).expect(200);
+    const ownOne = await request(http).get(`/api/assignments/${made.body.id}`).set(student.auth).expect(200);
+    expect(mine.body.find((a: { id: string }) => a.id === made.body.id)).toEqual(ownOne.body);
+    expect(ownOne.body).toMatchObject({ note, dueAt: due, status: 'not-started' });
+    await request(http).delete(`/api/assignments/${made.body.id}`).set(teacher.auth).expect(204);
+  });
+
   it('should not let a teacher assign to another teacher\'s class', async () => {
     const due = new Date(Date.now() + 86_400_000).toISOString();
     await request(http).post('/api/assignments').set(otherTeacher.auth).send({ classId, drillId, dueAt: due }).expect(404);

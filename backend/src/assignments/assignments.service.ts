@@ -7,7 +7,7 @@ import type { AuthUser } from '../common/decorators/current-user.decorator';
 import { DrillsService } from '../drills/drills.service';
 import { statusFromSummary, type AssignmentStatus, type AttemptSummary } from './assignment-status';
 import { Assignment } from './entities/assignment.entity';
-import { isoDateColumns, IsoDate } from './iso-date';
+import { isoDateText } from './iso-date';
 import { preparedQuery } from './prepared-query';
 
 export interface AssignmentView {
@@ -28,18 +28,10 @@ const notFound = () =>
   new NotFoundException({ code: 'not_found', message: 'There is no assignment with this id.' });
 
 interface Row {
-  id: string;
-  class_id: string;
-  class_name: string;
-  teacher_id: string;
-  drill_id: string;
-  drill_title: string;
-  drill_kind: string;
+  /** The assignment's JSON without its status or counts, as PostgreSQL wrote it (json_build_object). */
+  view: string;
   due_at_ms: number;
-  due_at_iso: string;
-  note: string;
-  created_at_ms: number;
-  created_at_iso: string;
+  teacher_id: string;
   /** Whether a student caller is on the class's roster (false for others). */
   is_member: boolean;
   /** A student caller's own cell (null: nothing handed in). */
@@ -47,6 +39,14 @@ interface Row {
   latest_state: AttemptSummary['latestState'] | null;
   /** For a teacher or admin: [passed, newest state, how many roster students] groups; null state: nothing handed in. */
   groups: [boolean | null, AttemptSummary['latestState'] | null, number][] | null;
+}
+
+/** A list row as the list query's json_agg gives it: view, due_at_ms, passed, latest_state, groups. */
+type ListRow = [Row['view'], Row['due_at_ms'], Row['passed'], Row['latest_state'], Row['groups']];
+
+/** An assignment as parsed from the JSON the API sends, with its dates as Dates again. */
+function withDates(view: AssignmentView): AssignmentView {
+  return { ...view, dueAt: new Date(view.dueAt), createdAt: new Date(view.createdAt) };
 }
 
 @Injectable()
@@ -73,10 +73,17 @@ export class AssignmentsService {
   }
 
   /** Teachers: assignments of the classes they run; students: of the classes they are on, with their status. */
-  async findAll(
-    caller: AuthUser,
-    { classId }: { classId?: string } = {},
-  ): Promise<AssignmentView[]> {
+  async findAll(caller: AuthUser, filter: { classId?: string } = {}): Promise<AssignmentView[]> {
+    return (JSON.parse(await this.findAllJson(caller, filter)) as AssignmentView[]).map(withDates);
+  }
+
+  /**
+   * The list as the JSON text the API sends: PostgreSQL writes each assignment's JSON and hands
+   * the list over as one json_agg row; the status rule's part (a student's status, a teacher's
+   * counts) is added to each object's text here. Parsing a 5 KB list and serialising it again
+   * were, with pg's per-field parsing before it, about a fifth of the route's server time.
+   */
+  async findAllJson(caller: AuthUser, { classId }: { classId?: string } = {}): Promise<string> {
     const role =
       caller.role === 'student' ? 'student' : caller.role === 'admin' ? 'admin' : 'teacher';
     let where =
@@ -90,17 +97,21 @@ export class AssignmentsService {
       params.push(classId);
       where += ' AND a.class_id = $2';
     }
-    // The whole list as one json row: pg turns each field of each row into a string and then
-    // into its type (a fifth of this route's server time with 12 rows of 16 fields); one JSON
-    // text is parsed natively in one go.
-    const [{ rows }] = await preparedQuery<{ rows: Row[] }>(
+    const [{ rows }] = await preparedQuery<{ rows: ListRow[] }>(
       this.dataSource,
       `assignments-list-${role}${classId ? '-class' : ''}`,
-      `SELECT coalesce(json_agg(l ORDER BY l.due_at_ms, l.id), '[]'::json) AS rows
+      `SELECT coalesce(json_agg(json_build_array(l.view, l.due_at_ms, l.passed, l.latest_state, l.groups)
+                                ORDER BY l.due_at_ms, l.id), '[]'::json) AS rows
          FROM (${this.listQuery(caller)} WHERE ${where}) l`,
       params,
     );
-    return rows.map((row) => this.toView(caller, row));
+    let json = '[';
+    for (let i = 0; i < rows.length; i++) {
+      const [view, dueAtMs, passed, latestState, groups] = rows[i];
+      if (i > 0) json += ',';
+      json += this.withStanding(caller, view, dueAtMs, passed, latestState, groups);
+    }
+    return `${json}]`;
   }
 
   async findOne(caller: AuthUser, id: string): Promise<AssignmentView> {
@@ -112,7 +123,18 @@ export class AssignmentsService {
       [caller.id, id],
     );
     if (!row || !this.canSee(caller, row)) throw notFound();
-    return this.toView(caller, row);
+    return withDates(
+      JSON.parse(
+        this.withStanding(
+          caller,
+          row.view,
+          row.due_at_ms,
+          row.passed,
+          row.latest_state,
+          row.groups,
+        ),
+      ) as AssignmentView,
+    );
   }
 
   async update(
@@ -165,9 +187,13 @@ export class AssignmentsService {
    */
   private listQuery(caller: AuthUser): string {
     const forStudent = caller.role === 'student';
-    return `SELECT a.id, a.class_id, c.name AS class_name, c.teacher_id, a.drill_id, d.title AS drill_title,
-                   d.kind AS drill_kind, a.note,
-                   ${isoDateColumns('a.due_at', 'due_at')}, ${isoDateColumns('a.created_at', 'created_at')},
+    // The view's keys in AssignmentView's order; dates as the text Date.prototype.toJSON gives.
+    return `SELECT a.id,
+                   json_build_object('id', a.id, 'classId', a.class_id, 'className', c.name,
+                                     'drill', json_build_object('id', d.id, 'title', d.title, 'kind', d.kind),
+                                     'dueAt', ${isoDateText('a.due_at')}, 'note', a.note,
+                                     'createdAt', ${isoDateText('a.created_at')})::text AS view,
+                   floor(extract(epoch FROM a.due_at) * 1000)::float8 AS due_at_ms, c.teacher_id,
                    ${
                      forStudent
                        ? `EXISTS (SELECT 1 FROM class_members m WHERE m.class_id = a.class_id AND m.student_id = $1) AS is_member,
@@ -180,44 +206,42 @@ export class AssignmentsService {
               ${forStudent ? 'LEFT JOIN assignment_cells x ON x.assignment_id = a.id AND x.student_id = $1' : 'LEFT JOIN assignment_standings st ON st.assignment_id = a.id'}`;
   }
 
-  private toView(caller: AuthUser, row: Row): AssignmentView {
-    const dueAt = new IsoDate(row.due_at_ms, row.due_at_iso);
-    const view: AssignmentView = {
-      id: row.id,
-      classId: row.class_id,
-      className: row.class_name,
-      drill: { id: row.drill_id, title: row.drill_title, kind: row.drill_kind },
-      dueAt,
-      note: row.note,
-      createdAt: new IsoDate(row.created_at_ms, row.created_at_iso),
-    };
+  /** The assignment's JSON with the status rule's part added: a student's status or a teacher's counts. */
+  private withStanding(
+    caller: AuthUser,
+    view: string,
+    dueAtMs: number,
+    passed: boolean | null,
+    latestState: AttemptSummary['latestState'] | null,
+    groups: Row['groups'],
+  ): string {
+    const dueAt = new Date(dueAtMs);
+    // The view is a JSON object PostgreSQL wrote; it ends in "}".
+    const open = view.slice(0, view.lastIndexOf('}'));
     if (caller.role === 'student') {
-      view.status = statusFromSummary(
-        row.latest_state === null
-          ? undefined
-          : { passed: row.passed!, latestState: row.latest_state },
+      const status = statusFromSummary(
+        latestState === null ? undefined : { passed: passed!, latestState },
         dueAt,
       );
-    } else {
-      const counts: Record<AssignmentStatus, number> = {
-        'not-started': 0,
-        submitted: 0,
-        'needs-retake': 0,
-        passed: 0,
-        failed: 0,
-        late: 0,
-      };
-      // A group with no newest state: roster students who have handed nothing in.
-      for (const [passed, latestState, students] of row.groups ?? []) {
-        counts[
-          statusFromSummary(
-            latestState === null ? undefined : { passed: passed!, latestState },
-            dueAt,
-          )
-        ] += students;
-      }
-      view.counts = counts;
+      return `${open},"status":"${status}"}`;
     }
-    return view;
+    const counts: Record<AssignmentStatus, number> = {
+      'not-started': 0,
+      submitted: 0,
+      'needs-retake': 0,
+      passed: 0,
+      failed: 0,
+      late: 0,
+    };
+    // A group with no newest state: roster students who have handed nothing in.
+    for (const [groupPassed, groupState, students] of groups ?? []) {
+      counts[
+        statusFromSummary(
+          groupState === null ? undefined : { passed: groupPassed!, latestState: groupState },
+          dueAt,
+        )
+      ] += students;
+    }
+    return `${open},"counts":${JSON.stringify(counts)}}`;
   }
 }

@@ -17,8 +17,7 @@ export class IsoDate extends Date {
   }
 }
 
-/** The SQL for the two columns an IsoDate is made from: `<name>_ms` (float8) and `<name>_iso` (text). */
-export function isoDateColumns(expression: string, name: string): string {
-  return `floor(extract(epoch FROM ${expression}) * 1000)::float8 AS ${name}_ms,
-          to_char(${expression} AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"') AS ${name}_iso`;
+/** The SQL for a timestamptz as the ISO 8601 text `Date.prototype.toJSON` gives (UTC, milliseconds). */
+export function isoDateText(expression: string): string {
+  return `to_char(${expression} AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
 }
