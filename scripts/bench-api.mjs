@@ -16,35 +16,33 @@ import { startTestCluster } from './lib/test-cluster.mjs';
 
 const DURATION = Number(process.env.BENCH_SECONDS ?? 10);
 const CONNECTIONS = 32;
-const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 2);
 // Extra node flags for the server, e.g. BENCH_SERVER_FLAGS="--cpu-prof --cpu-prof-dir=/tmp/prof"
 // to profile it; BENCH_ROUTES="list" runs only the routes whose name contains one of the words;
 // BENCH_ROUNDS (default 2) how often each route is run, between floor runs.
 const serverFlags = (process.env.BENCH_SERVER_FLAGS ?? '').split(' ').filter(Boolean);
 const routeFilter = (process.env.BENCH_ROUTES ?? '').split(',').filter(Boolean);
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 2);
 
-/** CPU time (ms) a process has used so far, from /proc (Linux), or null where it cannot be read. */
-function cpuMs(pid) {
+/** A process's parent pid and the CPU time (ms) it has used so far, from /proc (Linux), or null. */
+function procStat(pid) {
   try {
-    // Fields after the command name: state is 3rd, utime 14th, stime 15th (proc(5)); ticks of 10 ms.
+    // Fields after the command name: state, ppid, …, utime 14th, stime 15th (proc(5)); 10 ms ticks.
     const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
-    return (Number(fields[11]) + Number(fields[12])) * 10;
+    return { ppid: Number(fields[1]), cpuMs: (Number(fields[11]) + Number(fields[12])) * 10 };
   } catch {
-    return null;
+    return null; // gone, or not Linux
   }
 }
+
+const cpuMs = (pid) => procStat(pid)?.cpuMs ?? null;
 
 /** CPU time (ms) of a PostgreSQL server and all its backends (processes whose parent it is). */
 function clusterCpuMs(postmasterPid) {
   let total = cpuMs(postmasterPid) ?? 0;
   for (const entry of readdirSync('/proc')) {
     if (!/^\d+$/.test(entry)) continue;
-    try {
-      const fields = readFileSync(`/proc/${entry}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
-      if (Number(fields[1]) === postmasterPid) total += (Number(fields[11]) + Number(fields[12])) * 10;
-    } catch {
-      // gone meanwhile
-    }
+    const stat = procStat(entry);
+    if (stat?.ppid === postmasterPid) total += stat.cpuMs;
   }
   return total;
 }

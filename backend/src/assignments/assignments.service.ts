@@ -41,6 +41,9 @@ interface Row {
   groups: [boolean | null, AttemptSummary['latestState'] | null, number][] | null;
 }
 
+/** What the list query selects of a row: the view and what the status rule needs. */
+type ListRow = Pick<Row, 'view' | 'due_at_ms' | 'passed' | 'latest_state' | 'groups'>;
+
 /** An assignment as parsed from the JSON the API sends, with its dates as Dates again. */
 function withDates(view: AssignmentView): AssignmentView {
   return { ...view, dueAt: new Date(view.dueAt), createdAt: new Date(view.createdAt) };
@@ -94,7 +97,7 @@ export class AssignmentsService {
       params.push(classId);
       where += ' AND a.class_id = $2';
     }
-    const rows = await preparedQuery<Row>(
+    const rows = await preparedQuery<ListRow>(
       this.dataSource,
       `assignments-list-${role}${classId ? '-class' : ''}`,
       `SELECT l.view, l.due_at_ms, l.passed, l.latest_state, l.groups
@@ -103,9 +106,8 @@ export class AssignmentsService {
     );
     let json = '[';
     for (let i = 0; i < rows.length; i++) {
-      const { view, due_at_ms, passed, latest_state, groups } = rows[i];
       if (i > 0) json += ',';
-      json += this.withStanding(caller, view, due_at_ms, passed, latest_state, groups);
+      json += this.withStanding(caller, rows[i]);
     }
     return `${json}]`;
   }
@@ -119,18 +121,7 @@ export class AssignmentsService {
       [caller.id, id],
     );
     if (!row || !this.canSee(caller, row)) throw notFound();
-    return withDates(
-      JSON.parse(
-        this.withStanding(
-          caller,
-          row.view,
-          row.due_at_ms,
-          row.passed,
-          row.latest_state,
-          row.groups,
-        ),
-      ) as AssignmentView,
-    );
+    return withDates(JSON.parse(this.withStanding(caller, row)) as AssignmentView);
   }
 
   async update(
@@ -208,13 +199,9 @@ export class AssignmentsService {
   /** The assignment's JSON with the status rule's part added: a student's status or a teacher's counts. */
   private withStanding(
     caller: AuthUser,
-    view: string,
-    dueAtMs: number,
-    passed: boolean | null,
-    latestState: AttemptSummary['latestState'] | null,
-    groups: Row['groups'],
+    { view, due_at_ms, passed, latest_state: latestState, groups }: ListRow,
   ): string {
-    const dueAt = new Date(dueAtMs);
+    const dueAt = new Date(due_at_ms);
     // The view is a JSON object PostgreSQL wrote; it ends in "}".
     const open = view.slice(0, view.lastIndexOf('}'));
     if (caller.role === 'student') {
