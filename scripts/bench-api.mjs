@@ -53,7 +53,9 @@ runMain(async () => {
   await buildIfStale(rootDir, ['common', 'backend'], { log: (line) => console.error(line) });
   const testCluster = await startTestCluster();
   const storage = mkdtempSync(join(tmpdir(), 'mixmark-bench-'));
+  const servers = [];
   let server;
+  let base;
   try {
     await testCluster.cluster.ensureDatabase('bench');
     const port = await freePort();
@@ -63,9 +65,21 @@ runMain(async () => {
       DATABASE_POOL_SIZE: process.env.BENCH_POOL_SIZE ?? '16', SIGN_IN_LIMIT_PER_MINUTE: '100000', SIGN_IN_IP_LIMIT_PER_MINUTE: '100000',
     };
     await run(process.execPath, [join(rootDir, 'backend/dist/cli.js'), 'migrate'], { env, capture: true });
-    server = spawn(process.execPath, [...serviceNodeFlags, ...serverFlags, join(rootDir, 'backend/dist/main.js')], { env, stdio: ['ignore', 'ignore', 'inherit'] });
-    const base = `http://127.0.0.1:${port}`;
-    if (!(await waitForOk(`${base}/api/health`, { child: server }))) throw new Error('the server did not start');
+    const startServer = async (extraEnv) => {
+      const serverPort = extraEnv.PORT ?? String(await freePort());
+      const child = spawn(process.execPath, [...serviceNodeFlags, ...serverFlags, join(rootDir, 'backend/dist/main.js')], {
+        env: { ...env, ...extraEnv, PORT: serverPort }, stdio: ['ignore', 'ignore', 'inherit'],
+      });
+      servers.push(child);
+      const url = `http://127.0.0.1:${serverPort}`;
+      if (!(await waitForOk(`${url}/api/health`, { child }))) throw new Error('the server did not start');
+      return { child, url };
+    };
+    // The server as deployed, and beside it (idle unless measured) one that keeps no assignment
+    // lists, so that every list request reads the list from PostgreSQL: the cost after a write.
+    const deployed = await startServer({ PORT: String(port) });
+    ({ child: server, url: base } = deployed);
+    const uncached = await startServer({ LIST_CACHE_ENTRIES: '0' });
 
     // A teacher with a class of 30 students, 12 assignments and 4 graded attempts each.
     const post = async (path, body, token) => {
@@ -100,26 +114,31 @@ runMain(async () => {
 
     const auth = { authorization: `Bearer ${teacher.accessToken}` };
     const floorCase = { name: 'floor: one indexed SELECT (GET /api/health/db)', path: '/api/health/db', headers: {} };
+    const studentAuth = { authorization: `Bearer ${student.accessToken}` };
     const routes = [
       { name: 'assignments list, signed in (GET /api/assignments)', path: '/api/assignments', headers: auth },
       { name: 'gradebook, 30 students x 12 (GET /api/classes/:id/gradebook)', path: `/api/classes/${klass.id}/gradebook`, headers: auth },
-      { name: "a student's own list (GET /api/assignments)", path: '/api/assignments', headers: { authorization: `Bearer ${student.accessToken}` } },
+      { name: "a student's own list (GET /api/assignments)", path: '/api/assignments', headers: studentAuth },
+      { name: 'assignments list, every request read (no kept lists)', path: '/api/assignments', headers: auth, server: uncached },
+      { name: "a student's own list, every request read", path: '/api/assignments', headers: studentAuth, server: uncached },
     ].filter((c) => routeFilter.length === 0 || routeFilter.some((word) => c.name.includes(word)));
     const show = (load) => load.map((v) => v.toFixed(2)).join(', ');
     const loadBefore = show(loadavg());
     const postmasterPid = Number(readFileSync(join(testCluster.cluster.dataDir, 'postmaster.pid'), 'utf8').split('\n')[0]);
-    let warmUpSeconds = 3; // the first run: the server's code is not compiled yet
     const measure = async (c) => {
-      await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: 4, duration: warmUpSeconds });
-      warmUpSeconds = 1;
-      const before = { server: cpuMs(server.pid), db: clusterCpuMs(postmasterPid), bench: process.cpuUsage() };
-      const r = await autocannon({ url: `${base}${c.path}`, headers: c.headers, connections: CONNECTIONS, duration: DURATION });
+      const target = c.server ?? deployed;
+      const url = `${target.url}${c.path}`;
+      await autocannon({ url, headers: c.headers, connections: 4, duration: target.warm ? 1 : 3 }); // first run: code not compiled yet
+      target.warm = true;
+      const serverPid = target.child.pid;
+      const before = { server: cpuMs(serverPid), db: clusterCpuMs(postmasterPid), bench: process.cpuUsage() };
+      const r = await autocannon({ url, headers: c.headers, connections: CONNECTIONS, duration: DURATION });
       if (r.non2xx > 0) throw new Error(`${c.path} answered ${r.non2xx} non-2xx responses`);
       const perRequest = (ms) => (ms === null || !r.requests.total ? NaN : (1000 * ms) / r.requests.total);
       const benchCpu = process.cpuUsage(before.bench);
       return {
         rps: r.requests.average, p50: r.latency.p50, p99: r.latency.p99,
-        serverUs: perRequest(before.server === null ? null : cpuMs(server.pid) - before.server),
+        serverUs: perRequest(before.server === null ? null : cpuMs(serverPid) - before.server),
         dbUs: perRequest(clusterCpuMs(postmasterPid) - before.db),
         benchUs: perRequest((benchCpu.user + benchCpu.system) / 1000),
       };
@@ -140,12 +159,12 @@ runMain(async () => {
     const us = (v) => (Number.isFinite(v) ? v.toFixed(0) : '–');
     const pct = (v) => `${(100 * v).toFixed(0)} %`;
     const line = (name, runs, share) =>
-      name.padEnd(62) + mean(runs.map((r) => r.rps)).toFixed(0).padStart(7) + share.padStart(17) +
+      name.padEnd(62) + mean(runs.map((r) => r.rps)).toFixed(0).padStart(7) + share.padStart(19) +
       String(Math.max(...runs.map((r) => r.p50))).padStart(8) + String(Math.max(...runs.map((r) => r.p99))).padStart(8) +
       us(mean(runs.map((r) => r.serverUs))).padStart(9) + us(mean(runs.map((r) => r.dbUs))).padStart(8) + us(mean(runs.map((r) => r.benchUs))).padStart(8);
-    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s a run, ${ROUNDS} rounds (one server process, NODE_ENV=production)\n`);
-    console.log(''.padEnd(62) + ''.padStart(7) + 'vs floor*'.padStart(17) + 'worst of the runs'.padStart(18) + 'CPU µs per request'.padStart(25));
-    console.log('route'.padEnd(62) + 'req/s'.padStart(7) + '(each round)'.padStart(17) + 'p50 ms'.padStart(8) + 'p99 ms'.padStart(8) + 'server'.padStart(9) + 'db'.padStart(8) + 'bench'.padStart(8));
+    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s a run, ${ROUNDS} rounds (NODE_ENV=production; "every request read": a second server process with LIST_CACHE_ENTRIES=0)\n`);
+    console.log(''.padEnd(62) + ''.padStart(7) + 'vs floor*'.padStart(19) + 'worst of the runs'.padStart(18) + 'CPU µs per request'.padStart(25));
+    console.log('route'.padEnd(62) + 'req/s'.padStart(7) + '(each round)'.padStart(19) + 'p50 ms'.padStart(8) + 'p99 ms'.padStart(8) + 'server'.padStart(9) + 'db'.padStart(8) + 'bench'.padStart(8));
     console.log(line(`${floorCase.name}, ${floors.length} runs`, floors, floors.map((f) => f.rps.toFixed(0)).join('/')));
     routes.forEach((c, i) => console.log(line(c.name, byRoute[i], `${pct(mean(byRoute[i].map((r) => r.share)))} (${byRoute[i].map((r) => pct(r.share).replace(' ', '')).join(' ')})`)));
     console.log('\n* each round against the mean of the floor runs before and after it; the figure is the mean of the rounds.');
@@ -153,10 +172,11 @@ runMain(async () => {
     console.log('Aim: the list route at least 70 % of the floor with p99 under 50 ms.');
     console.log(`Load average (1, 5, 15 min) before ${loadBefore}, after ${show(loadavg())} (2 shared cores: compare with the floor of the same run).`);
   } finally {
-    if (server && server.exitCode === null) {
+    for (const child of servers) {
+      if (child.exitCode !== null) continue;
       await new Promise((resolve) => {
-        server.once('exit', resolve);
-        server.kill('SIGTERM');
+        child.once('exit', resolve);
+        child.kill('SIGTERM');
       });
     }
     await testCluster.remove();

@@ -1,9 +1,12 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { CreateAssignmentInput, UpdateAssignmentInput } from '@mixmark/common';
+import { LRUCache } from 'lru-cache';
 import { DataSource, Repository } from 'typeorm';
 import { ClassesService } from '../classes/classes.service';
 import type { AuthUser } from '../common/decorators/current-user.decorator';
+import type { AllConfigType } from '../config/config.type';
 import { DrillsService } from '../drills/drills.service';
 import { statusFromSummary, type AssignmentStatus, type AttemptSummary } from './assignment-status';
 import { Assignment } from './entities/assignment.entity';
@@ -44,6 +47,32 @@ interface Row {
 /** What the list query selects of a row: the view and what the status rule needs. */
 type ListRow = Pick<Row, 'view' | 'due_at_ms' | 'passed' | 'latest_state' | 'groups'>;
 
+/**
+ * A teacher's or student's list as read, with the counters of the caller's classes read just
+ * before it, and its JSON as last sent with the time (ms) until which that text holds.
+ */
+interface KeptList {
+  stamps: string;
+  rows: ListRow[];
+  json: string;
+  jsonUntil: number;
+}
+
+/**
+ * The counters (see the AddClassListStamps migration) of every class whose assignments a
+ * teacher's or a student's list shows, as one text: `class id:counter` in class id order. A
+ * class made, joined, left or given away changes the set and so the text, as does any write to
+ * what the list shows.
+ */
+const STAMPS_SQL = {
+  teacher: `SELECT coalesce(string_agg(c.id || ':' || coalesce(s.stamp, 0), ',' ORDER BY c.id), '') AS stamps
+              FROM classes c LEFT JOIN class_list_stamps s ON s.class_id = c.id
+             WHERE c.teacher_id = $1`,
+  student: `SELECT coalesce(string_agg(m.class_id || ':' || coalesce(s.stamp, 0), ',' ORDER BY m.class_id), '') AS stamps
+              FROM class_members m LEFT JOIN class_list_stamps s ON s.class_id = m.class_id
+             WHERE m.student_id = $1`,
+};
+
 /** An assignment as parsed from the JSON the API sends, with its dates as Dates again. */
 function withDates(view: AssignmentView): AssignmentView {
   return { ...view, dueAt: new Date(view.dueAt), createdAt: new Date(view.createdAt) };
@@ -51,12 +80,19 @@ function withDates(view: AssignmentView): AssignmentView {
 
 @Injectable()
 export class AssignmentsService {
+  /** Teachers' and students' lists, by caller and filter; null when none are kept. */
+  private readonly keptLists: LRUCache<string, KeptList> | null;
+
   constructor(
     @InjectRepository(Assignment) private readonly assignmentsRepository: Repository<Assignment>,
     private readonly classesService: ClassesService,
     private readonly drillsService: DrillsService,
     private readonly dataSource: DataSource,
-  ) {}
+    configService: ConfigService<AllConfigType>,
+  ) {
+    const max = configService.getOrThrow('database.listCacheEntries', { infer: true });
+    this.keptLists = max > 0 ? new LRUCache({ max }) : null;
+  }
 
   async create(teacher: AuthUser, input: CreateAssignmentInput): Promise<AssignmentView> {
     await this.classesService.findOwned(teacher, input.classId);
@@ -83,7 +119,47 @@ export class AssignmentsService {
    * added to each object's text here. Parsing a 5 KB list and serialising it again, and pg's
    * parsing of 16 fields a row before that, were about a fifth of the route's server time.
    */
-  async findAllJson(caller: AuthUser, { classId }: { classId?: string } = {}): Promise<string> {
+  async findAllJson(caller: AuthUser, filter: { classId?: string } = {}): Promise<string> {
+    if (caller.role === 'admin' || !this.keptLists) {
+      return this.listJson(caller, await this.readList(caller, filter), Date.now()).json;
+    }
+    const role = caller.role === 'student' ? 'student' : 'teacher';
+    const [{ stamps }] = await preparedQuery<{ stamps: string }>(
+      this.dataSource,
+      `class-list-stamps-${role}`,
+      STAMPS_SQL[role],
+      [caller.id],
+    );
+    const key = `${role}:${caller.id}:${filter.classId ?? ''}`;
+    let kept = this.keptLists.get(key);
+    if (kept?.stamps !== stamps) {
+      // Read after the counters: a write committed in between leaves these rows under counters
+      // that are already old, and the next request reads the list again.
+      kept = { stamps, rows: await this.readList(caller, filter), json: '', jsonUntil: -Infinity };
+      this.keptLists.set(key, kept);
+    }
+    const now = Date.now();
+    if (now > kept.jsonUntil) Object.assign(kept, this.listJson(caller, kept.rows, now));
+    return kept.json;
+  }
+
+  /**
+   * The list's JSON at `now` (ms), and until when it holds: the status rule looks at the clock
+   * only to ask whether a due date has passed, so the text stays the same until the next due
+   * date still ahead goes by.
+   */
+  private listJson(caller: AuthUser, rows: ListRow[], now: number): { json: string; jsonUntil: number } {
+    let json = '[';
+    let jsonUntil = Infinity;
+    for (let i = 0; i < rows.length; i++) {
+      if (i > 0) json += ',';
+      json += this.withStanding(caller, rows[i], now);
+      if (rows[i].due_at_ms >= now) jsonUntil = Math.min(jsonUntil, rows[i].due_at_ms);
+    }
+    return { json: `${json}]`, jsonUntil };
+  }
+
+  private async readList(caller: AuthUser, { classId }: { classId?: string }): Promise<ListRow[]> {
     const role =
       caller.role === 'student' ? 'student' : caller.role === 'admin' ? 'admin' : 'teacher';
     let where =
@@ -97,19 +173,13 @@ export class AssignmentsService {
       params.push(classId);
       where += ' AND a.class_id = $2';
     }
-    const rows = await preparedQuery<ListRow>(
+    return preparedQuery<ListRow>(
       this.dataSource,
       `assignments-list-${role}${classId ? '-class' : ''}`,
       `SELECT l.view, l.due_at_ms, l.passed, l.latest_state, l.groups
          FROM (${this.listQuery(caller)} WHERE ${where}) l ORDER BY l.due_at_ms, l.id`,
       params,
     );
-    let json = '[';
-    for (let i = 0; i < rows.length; i++) {
-      if (i > 0) json += ',';
-      json += this.withStanding(caller, rows[i]);
-    }
-    return `${json}]`;
   }
 
   async findOne(caller: AuthUser, id: string): Promise<AssignmentView> {
@@ -200,14 +270,17 @@ export class AssignmentsService {
   private withStanding(
     caller: AuthUser,
     { view, due_at_ms, passed, latest_state: latestState, groups }: ListRow,
+    nowMs = Date.now(),
   ): string {
     const dueAt = new Date(due_at_ms);
+    const now = new Date(nowMs);
     // The view is a JSON object PostgreSQL wrote; it ends in "}".
     const open = view.slice(0, view.lastIndexOf('}'));
     if (caller.role === 'student') {
       const status = statusFromSummary(
         latestState === null ? undefined : { passed: passed!, latestState },
         dueAt,
+        now,
       );
       return `${open},"status":"${status}"}`;
     }
@@ -225,6 +298,7 @@ export class AssignmentsService {
         statusFromSummary(
           groupState === null ? undefined : { passed: groupPassed!, latestState: groupState },
           dueAt,
+          now,
         )
       ] += students;
     }

@@ -8,12 +8,17 @@ const schema = object({
     .matches(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL')
     .default('postgres://postgres@127.0.0.1:54310/mixmark'),
   DATABASE_POOL_SIZE: number().integer().min(1).max(200).default(10),
+  LIST_CACHE_ENTRIES: number().integer().min(0).max(1_000_000).default(5000),
 });
 
 /** Reads the database settings from the environment (also used by the TypeORM CLI). */
 export function readDatabaseConfig(env = process.env): DatabaseConfig {
   const parsed = validateConfig(schema, env);
-  return { url: parsed.DATABASE_URL, poolSize: parsed.DATABASE_POOL_SIZE };
+  return {
+    url: parsed.DATABASE_URL,
+    poolSize: parsed.DATABASE_POOL_SIZE,
+    listCacheEntries: parsed.LIST_CACHE_ENTRIES,
+  };
 }
 
 export default registerAs('database', (): DatabaseConfig => readDatabaseConfig());

@@ -5,6 +5,7 @@ import { AddAttemptOverlayPlan1764810000000 } from './1764810000000-AddAttemptOv
 import { AddAssignmentCells1764892800000 } from './1764892800000-AddAssignmentCells';
 import { AddAssignmentStandings1764896400000 } from './1764896400000-AddAssignmentStandings';
 import { AddInvitationRevokedAt1764900000000 } from './1764900000000-AddInvitationRevokedAt';
+import { AddClassListStamps1764907200000 } from './1764907200000-AddClassListStamps';
 
 /** Every migration, oldest first. Listed by hand so no glob or folder path is needed at run time. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   AddAssignmentCells1764892800000,
   AddAssignmentStandings1764896400000,
   AddInvitationRevokedAt1764900000000,
+  AddClassListStamps1764907200000,
 ];
