@@ -23,12 +23,20 @@ const serverFlags = (process.env.BENCH_SERVER_FLAGS ?? '').split(' ').filter(Boo
 const routeFilter = (process.env.BENCH_ROUTES ?? '').split(',').filter(Boolean);
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 2);
 
-/** A process's parent pid and the CPU time (ms) it has used so far, from /proc (Linux), or null. */
+/**
+ * A process's parent pid, the CPU time (ms) it has used so far, and that of its children that
+ * have ended and been waited for, from /proc (Linux), or null.
+ */
 function procStat(pid) {
   try {
-    // Fields after the command name: state, ppid, …, utime 14th, stime 15th (proc(5)); 10 ms ticks.
+    // Fields after the command name: state, ppid, …, utime 14th, stime 15th, cutime 16th,
+    // cstime 17th (proc(5)); 10 ms ticks.
     const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').replace(/^.*\) /, '').split(' ');
-    return { ppid: Number(fields[1]), cpuMs: (Number(fields[11]) + Number(fields[12])) * 10 };
+    return {
+      ppid: Number(fields[1]),
+      cpuMs: (Number(fields[11]) + Number(fields[12])) * 10,
+      endedChildrenCpuMs: (Number(fields[13]) + Number(fields[14])) * 10,
+    };
   } catch {
     return null; // gone, or not Linux
   }
@@ -36,9 +44,14 @@ function procStat(pid) {
 
 const cpuMs = (pid) => procStat(pid)?.cpuMs ?? null;
 
-/** CPU time (ms) of a PostgreSQL server and all its backends (processes whose parent it is). */
+/**
+ * CPU time (ms) of a PostgreSQL server and all its backends: the running ones (processes whose
+ * parent it is) and the ones that have ended (a pool closing idle connections), which the
+ * postmaster has waited for and the kernel counts in its children's time.
+ */
 function clusterCpuMs(postmasterPid) {
-  let total = cpuMs(postmasterPid) ?? 0;
+  const postmaster = procStat(postmasterPid);
+  let total = postmaster ? postmaster.cpuMs + postmaster.endedChildrenCpuMs : 0;
   for (const entry of readdirSync('/proc')) {
     if (!/^\d+$/.test(entry)) continue;
     const stat = procStat(entry);
@@ -79,7 +92,7 @@ runMain(async () => {
     // lists, so that every list request reads the list from PostgreSQL: the cost after a write.
     const deployed = await startServer({ PORT: String(port) });
     ({ child: server, url: base } = deployed);
-    const uncached = await startServer({ LIST_CACHE_ENTRIES: '0' });
+    const uncached = await startServer({ LIST_CACHE_MB: '0' });
 
     // A teacher with a class of 30 students, 12 assignments and 4 graded attempts each.
     const post = async (path, body, token) => {
@@ -162,7 +175,7 @@ runMain(async () => {
       name.padEnd(62) + mean(runs.map((r) => r.rps)).toFixed(0).padStart(7) + share.padStart(19) +
       String(Math.max(...runs.map((r) => r.p50))).padStart(8) + String(Math.max(...runs.map((r) => r.p99))).padStart(8) +
       us(mean(runs.map((r) => r.serverUs))).padStart(9) + us(mean(runs.map((r) => r.dbUs))).padStart(8) + us(mean(runs.map((r) => r.benchUs))).padStart(8);
-    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s a run, ${ROUNDS} rounds (NODE_ENV=production; "every request read": a second server process with LIST_CACHE_ENTRIES=0)\n`);
+    console.log(`\nAPI on 127.0.0.1, ${CONNECTIONS} connections, ${DURATION} s a run, ${ROUNDS} rounds (NODE_ENV=production; "every request read": a second server process with LIST_CACHE_MB=0)\n`);
     console.log(''.padEnd(62) + ''.padStart(7) + 'vs floor*'.padStart(19) + 'worst of the runs'.padStart(18) + 'CPU µs per request'.padStart(25));
     console.log('route'.padEnd(62) + 'req/s'.padStart(7) + '(each round)'.padStart(19) + 'p50 ms'.padStart(8) + 'p99 ms'.padStart(8) + 'server'.padStart(9) + 'db'.padStart(8) + 'bench'.padStart(8));
     console.log(line(`${floorCase.name}, ${floors.length} runs`, floors, floors.map((f) => f.rps.toFixed(0)).join('/')));

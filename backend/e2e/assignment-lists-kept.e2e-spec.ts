@@ -20,7 +20,7 @@ interface Listed {
 /**
  * A server keeps teachers' and students' assignment lists and serves them again while the class
  * counters (the AddClassListStamps migration's triggers) are unchanged. Two servers run here on
- * one database, as two processes would: `kept` keeps lists, `plain` (LIST_CACHE_ENTRIES=0) reads
+ * one database, as two processes would: `kept` keeps lists, `plain` (LIST_CACHE_MB=0) reads
  * every list from PostgreSQL, and every write goes through `plain` or straight to PostgreSQL (as
  * the grading worker on another machine writes). After each kind of write the list `kept` sends
  * must show it and equal the list `plain` reads.
@@ -36,7 +36,12 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
   let drillId: string;
 
   const list = async (app: INestApplication, account: TestAccount, query = ''): Promise<Listed[]> =>
-    (await request(app.getHttpServer()).get(`/api/assignments${query}`).set(account.auth).expect(200)).body as Listed[];
+    (
+      await request(app.getHttpServer())
+        .get(`/api/assignments${query}`)
+        .set(account.auth)
+        .expect(200)
+    ).body as Listed[];
 
   /** What `kept` sends to the account, after checking that it is what `plain` reads now. */
   const keptList = async (account: TestAccount, query = ''): Promise<Listed[]> => {
@@ -50,14 +55,22 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
 
   beforeAll(async () => {
     kept = await createTestApp();
-    plain = await withEnv({ LIST_CACHE_ENTRIES: '0' }, createTestApp);
+    plain = await withEnv({ LIST_CACHE_MB: '0' }, createTestApp);
     db = kept.get(DataSource);
     teacher = await registerAccount(kept, 'teacher');
     student = await registerAccount(kept, 'student');
     classmate = await registerAccount(kept, 'student');
-    const klass = await request(write()).post('/api/classes').set(teacher.auth).send({ name: 'Kept lists class' }).expect(201);
+    const klass = await request(write())
+      .post('/api/classes')
+      .set(teacher.auth)
+      .send({ name: 'Kept lists class' })
+      .expect(201);
     classId = klass.body.id;
-    await request(write()).post('/api/classes/join').set(student.auth).send({ code: klass.body.code }).expect(200);
+    await request(write())
+      .post('/api/classes/join')
+      .set(student.auth)
+      .send({ code: klass.body.code })
+      .expect(200);
     const drill = await request(write())
       .post('/api/drills')
       .set(teacher.auth)
@@ -83,10 +96,20 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
     expect(await keptList(teacher)).toEqual([]);
     expect(await keptList(student)).toEqual([]);
     const id = await assign(5 * dayMs, 'First wash');
-    expect(byId(await keptList(teacher), id)).toMatchObject({ note: 'First wash', counts: { 'not-started': 1 } });
-    expect(byId(await keptList(student), id)).toMatchObject({ note: 'First wash', status: 'not-started' });
+    expect(byId(await keptList(teacher), id)).toMatchObject({
+      note: 'First wash',
+      counts: { 'not-started': 1 },
+    });
+    expect(byId(await keptList(student), id)).toMatchObject({
+      note: 'First wash',
+      status: 'not-started',
+    });
 
-    await request(write()).patch(`/api/assignments/${id}`).set(teacher.auth).send({ note: 'Second wash' }).expect(200);
+    await request(write())
+      .patch(`/api/assignments/${id}`)
+      .set(teacher.auth)
+      .send({ note: 'Second wash' })
+      .expect(200);
     expect(byId(await keptList(teacher), id)?.note).toBe('Second wash');
     expect(byId(await keptList(student), id)?.note).toBe('Second wash');
     // The filtered list is kept under its own key and follows the same counters.
@@ -102,7 +125,11 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
     const id = await assign(6 * dayMs);
     await keptList(teacher);
     await keptList(student);
-    await request(write()).patch(`/api/classes/${classId}`).set(teacher.auth).send({ name: 'Kept lists, renamed' }).expect(200);
+    await request(write())
+      .patch(`/api/classes/${classId}`)
+      .set(teacher.auth)
+      .send({ name: 'Kept lists, renamed' })
+      .expect(200);
     expect(byId(await keptList(teacher), id)?.className).toBe('Kept lists, renamed');
     expect(byId(await keptList(student), id)?.className).toBe('Kept lists, renamed');
 
@@ -126,11 +153,21 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
       [student.id, drillId, id],
     );
     expect(byId(await keptList(student), id)?.status).toBe('submitted');
-    expect(byId(await keptList(teacher), id)?.counts).toMatchObject({ submitted: 1, 'not-started': 0 });
-    await db.query(`UPDATE attempts SET state = 'graded', score = 40, pass = false, graded_at = now() WHERE id = $1`, [attempt.id]);
+    expect(byId(await keptList(teacher), id)?.counts).toMatchObject({
+      submitted: 1,
+      'not-started': 0,
+    });
+    await db.query(
+      `UPDATE attempts SET state = 'graded', score = 40, pass = false, graded_at = now() WHERE id = $1`,
+      [attempt.id],
+    );
     expect(byId(await keptList(student), id)?.status).toBe('failed');
     expect(byId(await keptList(teacher), id)?.counts).toMatchObject({ failed: 1, submitted: 0 });
-    await request(write()).patch(`/api/attempts/${attempt.id}/override`).set(teacher.auth).send({ score: 80, pass: true, comment: 'The value is right.' }).expect(200);
+    await request(write())
+      .patch(`/api/attempts/${attempt.id}/override`)
+      .set(teacher.auth)
+      .send({ score: 80, pass: true, comment: 'The value is right.' })
+      .expect(200);
     expect(byId(await keptList(student), id)?.status).toBe('passed');
     expect(byId(await keptList(teacher), id)?.counts).toMatchObject({ passed: 1, failed: 0 });
   });
@@ -138,16 +175,27 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
   it('should follow students joining and leaving, and a class given to another teacher', async () => {
     const before = await keptList(classmate);
     expect(before).toEqual([]);
-    const { code } = (await request(write()).get(`/api/classes/${classId}`).set(teacher.auth).expect(200)).body;
+    const { code } = (
+      await request(write()).get(`/api/classes/${classId}`).set(teacher.auth).expect(200)
+    ).body;
     await request(write()).post('/api/classes/join').set(classmate.auth).send({ code }).expect(200);
     const joined = await keptList(classmate);
     expect(joined.length).toBeGreaterThan(0);
     const teacherList = await keptList(teacher);
-    expect(teacherList.every((entry) => Object.values(entry.counts!).reduce((a, b) => a + b, 0) === 2)).toBe(true);
+    expect(
+      teacherList.every((entry) => Object.values(entry.counts!).reduce((a, b) => a + b, 0) === 2),
+    ).toBe(true);
 
-    await request(write()).delete(`/api/classes/${classId}/students/${classmate.id}`).set(teacher.auth).expect(204);
+    await request(write())
+      .delete(`/api/classes/${classId}/students/${classmate.id}`)
+      .set(teacher.auth)
+      .expect(204);
     expect(await keptList(classmate)).toEqual([]);
-    expect((await keptList(teacher)).every((entry) => Object.values(entry.counts!).reduce((a, b) => a + b, 0) === 1)).toBe(true);
+    expect(
+      (await keptList(teacher)).every(
+        (entry) => Object.values(entry.counts!).reduce((a, b) => a + b, 0) === 1,
+      ),
+    ).toBe(true);
 
     // Not a route the app has: an administrator moving a class in the database.
     const other = await registerAccount(kept, 'teacher');
@@ -169,14 +217,24 @@ describe('assignment lists kept between requests (e2e, two servers on one Postgr
   });
 
   it('should drop the lists of a deleted class', async () => {
-    const klass = await request(write()).post('/api/classes').set(teacher.auth).send({ name: 'Short-lived class' }).expect(201);
-    await request(write()).post('/api/classes/join').set(classmate.auth).send({ code: klass.body.code }).expect(200);
+    const klass = await request(write())
+      .post('/api/classes')
+      .set(teacher.auth)
+      .send({ name: 'Short-lived class' })
+      .expect(201);
+    await request(write())
+      .post('/api/classes/join')
+      .set(classmate.auth)
+      .send({ code: klass.body.code })
+      .expect(200);
     await request(write())
       .post('/api/assignments')
       .set(teacher.auth)
       .send({ classId: klass.body.id, drillId, dueAt: new Date(Date.now() + dayMs).toISOString() })
       .expect(201);
-    expect((await keptList(classmate)).map((entry) => entry.className)).toEqual(['Short-lived class']);
+    expect((await keptList(classmate)).map((entry) => entry.className)).toEqual([
+      'Short-lived class',
+    ]);
     // No delete route: classes are archived. Deleting in the database cascades to assignments
     // and roster while the class is already gone; the triggers must not fail on it.
     await db.query(`DELETE FROM classes WHERE id = $1`, [klass.body.id]);

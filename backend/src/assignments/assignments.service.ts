@@ -59,6 +59,16 @@ interface KeptList {
 }
 
 /**
+ * About how many bytes a kept list holds: each row's JSON text twice (in the row and in the list
+ * sent; V8 keeps these one byte a character), the counters, and a little per row and entry.
+ */
+function keptSize(kept: KeptList): number {
+  let bytes = 200 + kept.stamps.length;
+  for (const row of kept.rows) bytes += 2 * row.view.length + 150;
+  return bytes;
+}
+
+/**
  * The counters (see the AddClassListStamps migration) of every class whose assignments a
  * teacher's or a student's list shows, as one text: `class id:counter` in class id order. A
  * class made, joined, left or given away changes the set and so the text, as does any write to
@@ -80,7 +90,7 @@ function withDates(view: AssignmentView): AssignmentView {
 
 @Injectable()
 export class AssignmentsService {
-  /** Teachers' and students' lists, by caller and filter; null when none are kept. */
+  /** Teachers' and students' lists, by caller and filter, up to LIST_CACHE_MB; null when none are kept. */
   private readonly keptLists: LRUCache<string, KeptList> | null;
 
   constructor(
@@ -90,8 +100,14 @@ export class AssignmentsService {
     private readonly dataSource: DataSource,
     configService: ConfigService<AllConfigType>,
   ) {
-    const max = configService.getOrThrow('database.listCacheEntries', { infer: true });
-    this.keptLists = max > 0 ? new LRUCache({ max }) : null;
+    const megabytes = configService.getOrThrow('database.listCacheMb', { infer: true });
+    this.keptLists =
+      megabytes > 0
+        ? new LRUCache<string, KeptList>({
+            maxSize: megabytes * 1_000_000,
+            sizeCalculation: keptSize,
+          })
+        : null;
   }
 
   async create(teacher: AuthUser, input: CreateAssignmentInput): Promise<AssignmentView> {
@@ -148,7 +164,11 @@ export class AssignmentsService {
    * only to ask whether a due date has passed, so the text stays the same until the next due
    * date still ahead goes by.
    */
-  private listJson(caller: AuthUser, rows: ListRow[], now: number): { json: string; jsonUntil: number } {
+  private listJson(
+    caller: AuthUser,
+    rows: ListRow[],
+    now: number,
+  ): { json: string; jsonUntil: number } {
     let json = '[';
     let jsonUntil = Infinity;
     for (let i = 0; i < rows.length; i++) {

@@ -13,8 +13,8 @@ export interface AppConfig {
 export interface DatabaseConfig {
   url: string;
   poolSize: number;
-  /** Assignment lists kept per server process, checked against the class counters (0: none kept). */
-  listCacheEntries: number;
+  /** Megabytes of assignment lists kept per server process, checked against the class counters (0: none kept). */
+  listCacheMb: number;
 }
 
 export interface AuthConfig {

@@ -8,7 +8,7 @@ const schema = object({
     .matches(/^postgres(ql)?:\/\//, 'DATABASE_URL must be a postgres:// URL')
     .default('postgres://postgres@127.0.0.1:54310/mixmark'),
   DATABASE_POOL_SIZE: number().integer().min(1).max(200).default(10),
-  LIST_CACHE_ENTRIES: number().integer().min(0).max(1_000_000).default(5000),
+  LIST_CACHE_MB: number().integer().min(0).max(4096).default(32),
 });
 
 /** Reads the database settings from the environment (also used by the TypeORM CLI). */
@@ -17,7 +17,7 @@ export function readDatabaseConfig(env = process.env): DatabaseConfig {
   return {
     url: parsed.DATABASE_URL,
     poolSize: parsed.DATABASE_POOL_SIZE,
-    listCacheEntries: parsed.LIST_CACHE_ENTRIES,
+    listCacheMb: parsed.LIST_CACHE_MB,
   };
 }
 

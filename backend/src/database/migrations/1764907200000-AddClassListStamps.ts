@@ -101,7 +101,9 @@ export class AddClassListStamps1764907200000 implements MigrationInterface {
       }
     }
     // Every existing class starts at 1.
-    await queryRunner.query(`INSERT INTO class_list_stamps (class_id, stamp) SELECT id, 1 FROM classes`);
+    await queryRunner.query(
+      `INSERT INTO class_list_stamps (class_id, stamp) SELECT id, 1 FROM classes`,
+    );
   }
 
   public async down(queryRunner: QueryRunner): Promise<void> {
