@@ -35,10 +35,16 @@ describe('auth (e2e, real PostgreSQL)', () => {
     const registered = await register(email).expect(201);
     expect(registered.body.user).toMatchObject({ email: email.toLowerCase(), role: 'teacher', displayName: 'Wren Test' });
     expect(registered.body.user.passwordHash).toBeUndefined();
-    const cookie = ([] as string[]).concat(registered.headers['set-cookie'] ?? []).join(';');
-    expect(cookie).toMatch(/HttpOnly/);
-    expect(cookie).toMatch(/SameSite=Strict/);
-    expect(cookie).toMatch(/Path=\/api\/auth/);
+    const cookies = ([] as string[]).concat(registered.headers['set-cookie'] ?? []);
+    const refresh = cookies.find((c) => c.startsWith('mixmark_refresh='));
+    expect(refresh).toMatch(/HttpOnly/);
+    expect(refresh).toMatch(/SameSite=Strict/);
+    expect(refresh).toMatch(/Path=\/api\/auth/);
+    // The page's hint that a session may be restored: no secret in it, so the page may read it.
+    const hint = cookies.find((c) => c.startsWith('mixmark_session='));
+    expect(hint).toMatch(/^mixmark_session=1; Path=\/; Expires=/);
+    expect(hint).toMatch(/SameSite=Strict/);
+    expect(hint).not.toMatch(/HttpOnly/);
 
     const signedIn = await request(http).post('/api/auth/sign-in').send({ email, password }).expect(200);
     const me = await request(http).get('/api/auth/me').set('authorization', `Bearer ${signedIn.body.accessToken}`).expect(200);
@@ -88,8 +94,12 @@ describe('auth (e2e, real PostgreSQL)', () => {
 
   it('should end the session on sign-out', async () => {
     const cookie = refreshCookie(await register().expect(201));
-    await request(http).post('/api/auth/sign-out').set('cookie', cookie).expect(204);
-    await request(http).post('/api/auth/refresh').set('cookie', cookie).expect(401);
+    const signedOut = await request(http).post('/api/auth/sign-out').set('cookie', cookie).expect(204);
+    const cleared = ([] as string[]).concat(signedOut.headers['set-cookie'] ?? []);
+    expect(cleared.find((c) => c.startsWith('mixmark_refresh='))).toMatch(/Expires=Thu, 01 Jan 1970/);
+    expect(cleared.find((c) => c.startsWith('mixmark_session='))).toMatch(/^mixmark_session=; Path=\/; Expires=Thu, 01 Jan 1970/);
+    const refused = await request(http).post('/api/auth/refresh').set('cookie', cookie).expect(401);
+    expect(([] as string[]).concat(refused.headers['set-cookie'] ?? []).some((c) => c.startsWith('mixmark_session=;'))).toBe(true);
   });
 
   it('should keep only a hash of each refresh token', async () => {

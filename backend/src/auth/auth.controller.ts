@@ -23,6 +23,12 @@ import { SignInRateLimitGuard } from './guards/sign-in-rate-limit.guard';
 import { PasswordResetsService } from './password-resets.service';
 
 export const REFRESH_COOKIE = 'mixmark_refresh';
+/**
+ * Set and cleared with the refresh cookie, readable by the page and holding nothing but "1": it
+ * tells the web app whether a session may be restored, so that a visitor who is not signed in
+ * does not send a refresh request bound to fail on every page load.
+ */
+export const SESSION_HINT_COOKIE = 'mixmark_session';
 
 /** What a session reply carries in its body; the refresh token goes only in the cookie. */
 export interface SessionReply {
@@ -117,11 +123,17 @@ export class AuthController {
       ...this.cookieOptions(),
       expires: session.refreshExpiresAt,
     });
+    response.cookie(SESSION_HINT_COOKIE, '1', { ...this.hintCookieOptions(), expires: session.refreshExpiresAt });
     return { accessToken: session.accessToken, expiresIn: session.expiresIn, user: session.user };
   }
 
   private clearCookie(response: Response): void {
     response.clearCookie(REFRESH_COOKIE, this.cookieOptions());
+    response.clearCookie(SESSION_HINT_COOKIE, this.hintCookieOptions());
+  }
+
+  private hintCookieOptions() {
+    return { ...this.cookieOptions(), httpOnly: false, path: '/' };
   }
 
   private cookieOptions() {

@@ -137,8 +137,26 @@ describe('api client', () => {
   });
 
   it('should restore a session from the refresh cookie', async () => {
+    document.cookie = 'mixmark_session=1; path=/';
     server.use(http.post('*/api/auth/refresh', () => HttpResponse.json(newSession)));
     await refreshSession();
     expect(authStore.get()).toMatchObject({ status: 'signed-in', accessToken: 'fresh-token' });
+  });
+
+  it('should not ask for a refresh without the session hint cookie, and be signed out', async () => {
+    let refreshes = 0;
+    server.use(
+      http.post('*/api/auth/refresh', () => {
+        refreshes += 1;
+        return HttpResponse.json(newSession);
+      }),
+    );
+    expect(await refreshSession()).toBeUndefined();
+    expect(refreshes).toBe(0);
+    expect(authStore.get().status).toBe('signed-out');
+    // Another cookie whose name only ends the same way does not count.
+    document.cookie = 'not_mixmark_session=1; path=/';
+    await refreshSession();
+    expect(refreshes).toBe(0);
   });
 });

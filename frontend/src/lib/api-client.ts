@@ -67,12 +67,26 @@ const sessionPaths = /^\/?auth\/(sign-in|register|refresh|sign-out|password-rese
 let refreshing: Promise<SessionReply | undefined> | undefined;
 
 /**
+ * Whether a session may be restored: the server sets `mixmark_session=1` beside the refresh
+ * cookie (which the page cannot read) and clears both together. Without it a refresh could only
+ * fail, so a visitor who is not signed in sends none.
+ */
+export function mayRestoreSession(): boolean {
+  return /(?:^|;\s*)mixmark_session=1(?:;|$)/.test(document.cookie);
+}
+
+/**
  * Asks for a new access token with the refresh cookie. Calls made while one is on its way share
  * it: the refresh token rotates, so two requests with the same cookie would end the session.
+ * With no session hint cookie nothing is sent and the store signs out at once.
  * When it fails the session is over: the store signs out (and the app clears its cache and the
  * protected routes send the person to sign in, see `app/provider.tsx` and `lib/authorization`).
  */
 export function refreshSession(): Promise<SessionReply | undefined> {
+  if (!refreshing && !mayRestoreSession()) {
+    authStore.signOut();
+    return Promise.resolve(undefined);
+  }
   refreshing ??= api
     .post<SessionReply>('/auth/refresh', undefined, { timeout: 15000 })
     .then(

@@ -9,5 +9,6 @@ afterEach(() => {
   cleanup();
   server.resetHandlers();
   authStore.reset();
+  document.cookie = 'mixmark_session=; expires=Thu, 01 Jan 1970 00:00:00 GMT; path=/';
 });
 afterAll(() => server.close());

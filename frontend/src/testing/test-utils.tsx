@@ -27,5 +27,7 @@ export function signInAs(role: UserRole, overrides: Partial<SessionUser> = {}): 
     ...overrides,
   };
   authStore.signIn('test-access-token', user);
+  // As the server does beside the refresh cookie (see lib/api-client's mayRestoreSession).
+  document.cookie = 'mixmark_session=1; path=/';
   return user;
 }
