@@ -9,13 +9,41 @@ import { Loading } from '@/components/ui/loading';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { useAttempt } from '@/features/attempts/api/get-attempt';
+import type { Attempt } from '@/features/attempts/types';
+import { useClasses } from '@/features/classes/api/get-classes';
 import { AttemptImage } from '@/features/attempts/components/attempt-image';
 import { AttemptResult } from '@/features/attempts/components/attempt-result';
 import { OverrideForm } from '@/features/attempts/components/override-form';
 import { isPending } from '@/features/attempts/types';
-import { useUser } from '@/lib/auth-store';
+import { useUser, type SessionUser } from '@/lib/auth-store';
 import { getAttemptQueryOptions } from '@/features/attempts/api/get-attempt';
 import { prefetchLoader } from '@/lib/route-loader';
+
+/**
+ * Who marked an overridden attempt, in words for the reader: "you" for the marker, the teacher's
+ * name for a student (the API gives the marker's id; the student's classes give their teachers'
+ * names), else a plain fallback. Asks for the classes only when there is an override to name.
+ */
+function useMarkedBy(
+  attempt: Attempt | undefined,
+  user: SessionUser | undefined,
+): string | undefined {
+  const by = attempt?.override?.by ?? null;
+  const isStudent = user?.role === 'student';
+  const classes = useClasses({
+    queryConfig: { enabled: Boolean(by) && isStudent && by !== user?.id },
+  });
+  if (!attempt?.override) return undefined;
+  if (by && by === user?.id) return 'you';
+  if (isStudent) {
+    const teacher = by
+      ? classes.data?.find((klass) => klass.teacher.id === by)?.teacher
+      : undefined;
+    return teacher?.displayName ?? 'your teacher';
+  }
+  if (user?.role === 'teacher') return 'another account';
+  return 'the teacher';
+}
 
 /** A student's result, or for the teacher the same with the photo and the override form. */
 export default function AttemptRoute() {
@@ -23,11 +51,16 @@ export default function AttemptRoute() {
   const user = useUser();
   const navigate = useNavigate();
   const attempt = useAttempt({ id: attemptId });
+  const markedBy = useMarkedBy(attempt.data, user);
 
   if (attempt.isPending) return <Loading label="Loading the attempt…" />;
-  if (attempt.isError) return <ErrorAlert error={attempt.error} onRetry={() => attempt.refetch()} />;
+  if (attempt.isError)
+    return <ErrorAlert error={attempt.error} onRetry={() => attempt.refetch()} />;
   const { data } = attempt;
-  const when = new Date(data.createdAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+  const when = new Date(data.createdAt).toLocaleString(undefined, {
+    dateStyle: 'medium',
+    timeStyle: 'short',
+  });
 
   if (user?.role !== 'teacher') {
     return (
@@ -35,7 +68,10 @@ export default function AttemptRoute() {
         <PageHeader title={data.drill.title} subtitle={`Your attempt of ${when}`} />
         <AttemptResult
           attempt={data}
-          onRetry={() => navigate(paths.student.drill.getHref(data.drill.id, data.assignmentId ?? undefined))}
+          markedBy={markedBy}
+          onRetry={() =>
+            navigate(paths.student.drill.getHref(data.drill.id, data.assignmentId ?? undefined))
+          }
         />
       </>
     );
@@ -43,10 +79,13 @@ export default function AttemptRoute() {
 
   return (
     <>
-      <PageHeader title={`${data.student.displayName}: ${data.drill.title}`} subtitle={`Sent ${when}`} />
+      <PageHeader
+        title={`${data.student.displayName}: ${data.drill.title}`}
+        subtitle={`Sent ${when}`}
+      />
       <Grid container spacing={3}>
         <Grid size={{ xs: 12, lg: 7 }}>
-          <AttemptResult attempt={data} />
+          <AttemptResult attempt={data} markedBy={markedBy} />
         </Grid>
         <Grid size={{ xs: 12, lg: 5 }}>
           <Stack spacing={3}>
@@ -55,7 +94,11 @@ export default function AttemptRoute() {
                 The photo
               </Typography>
               <LocalErrorBoundary what="photo">
-                <AttemptImage id={data.id} which="photo" alt={`Photo sent by ${data.student.displayName}`} />
+                <AttemptImage
+                  id={data.id}
+                  which="photo"
+                  alt={`Photo sent by ${data.student.displayName}`}
+                />
               </LocalErrorBoundary>
             </Paper>
             {!isPending(data.state) && data.state !== 'failed' && (

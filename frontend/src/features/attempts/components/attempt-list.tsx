@@ -23,8 +23,15 @@ const stateWords: Record<Attempt['state'], string> = {
   failed: 'Could not be marked',
 };
 
+/**
+ * The mark that stands: the teacher's when they marked it (also on a photo the machine could not
+ * measure), else the machine's once graded; otherwise where the attempt is.
+ */
 function Outcome({ attempt }: { attempt: Attempt }) {
-  if (attempt.state === 'graded' && attempt.pass !== null) return <PassBadge pass={attempt.pass} score={attempt.score} />;
+  if (attempt.override)
+    return <PassBadge pass={attempt.override.pass} score={attempt.override.score} />;
+  if (attempt.state === 'graded' && attempt.pass !== null)
+    return <PassBadge pass={attempt.pass} score={attempt.score} />;
   return <>{stateWords[attempt.state]}</>;
 }
 
@@ -42,8 +49,10 @@ export function AttemptList({
 }) {
   const attempts = useAttempts(filter);
   if (attempts.isPending) return <Loading label="Loading attempts…" />;
-  if (attempts.isError) return <ErrorAlert error={attempts.error} onRetry={() => attempts.refetch()} />;
-  if (attempts.data.length === 0) return <EmptyState title="No attempts yet">{emptyText}</EmptyState>;
+  if (attempts.isError)
+    return <ErrorAlert error={attempts.error} onRetry={() => attempts.refetch()} />;
+  if (attempts.data.length === 0)
+    return <EmptyState title="No attempts yet">{emptyText}</EmptyState>;
   return (
     <TableContainer component={Paper}>
       <Table size="small" aria-label="Attempts">
@@ -61,12 +70,17 @@ export function AttemptList({
         <TableBody>
           {attempts.data.map((attempt) => (
             <TableRow key={attempt.id}>
-              <TableCell>{new Date(attempt.createdAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })}</TableCell>
+              <TableCell>
+                {new Date(attempt.createdAt).toLocaleString(undefined, {
+                  dateStyle: 'medium',
+                  timeStyle: 'short',
+                })}
+              </TableCell>
               {showStudent && <TableCell>{attempt.student.displayName}</TableCell>}
               <TableCell>{attempt.drill.title}</TableCell>
               <TableCell>
                 <Outcome attempt={attempt} />
-                {attempt.override ? ' (teacher)' : ''}
+                {attempt.override ? " (teacher's mark)" : ''}
               </TableCell>
               <TableCell>
                 <Button size="small" component={RouterLink} to={attemptHref(attempt.id)}>
