@@ -13,6 +13,12 @@ export function useUpdateUserRole() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, role }: { id: string } & UpdateRoleInput) => updateUserRole(id, { role }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: getUsersQueryOptions().queryKey }),
+    onSuccess: (saved) => {
+      // The table shows the saved role at once, then the list is read again.
+      queryClient.setQueryData(getUsersQueryOptions().queryKey, (list) =>
+        list?.map((user) => (user.id === saved.id ? saved : user)),
+      );
+      return queryClient.invalidateQueries({ queryKey: getUsersQueryOptions().queryKey });
+    },
   });
 }
