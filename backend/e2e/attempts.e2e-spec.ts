@@ -92,13 +92,21 @@ describe('attempts: upload, queued grading, override (e2e, real PostgreSQL, pg-b
     expect(mail.subject).toContain('Burnt orange');
 
     const overlay = await request(http).get(`/api/attempts/${created.body.id}/overlay`).set(student.auth).expect(200);
-    expect(overlay.headers['content-type']).toBe('image/png');
+    expect(overlay.headers['content-type']).toBe('image/jpeg');
     // Drawn on this first view from the stored photo, at most 1280 px long, then kept: the
     // teacher's view gets the same bytes.
     const drawn = await sharp(overlay.body).metadata();
+    expect(drawn.format).toBe('jpeg');
     expect(Math.max(drawn.width!, drawn.height!)).toBeLessThanOrEqual(1280);
     const again = await request(http).get(`/api/attempts/${created.body.id}/overlay`).set(teacher.auth).expect(200);
     expect(Buffer.compare(again.body, overlay.body)).toBe(0);
+    // An attempt graded when overlays were PNG keeps its `.png` key: drawn and served as PNG.
+    const db = app.get(DataSource);
+    await db.query(`UPDATE attempts SET overlay_key = $2 WHERE id = $1`, [created.body.id, `attempts/${created.body.id}/overlay-before.png`]);
+    const older = await request(http).get(`/api/attempts/${created.body.id}/overlay`).set(student.auth).expect(200);
+    expect(older.headers['content-type']).toBe('image/png');
+    expect((await sharp(older.body).metadata()).format).toBe('png');
+    await db.query(`UPDATE attempts SET overlay_key = $2 WHERE id = $1`, [created.body.id, `attempts/${created.body.id}/overlay.jpg`]);
     const stored = await request(http).get(`/api/attempts/${created.body.id}/photo`).set(student.auth).expect(200);
     expect(stored.headers['content-type']).toBe('image/jpeg');
 

@@ -62,11 +62,11 @@ describe('photos in an S3-compatible bucket (e2e, real PostgreSQL and a local S3
     const photo = await client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/photo.jpg` }));
     expect(photo.ContentType).toBe('image/jpeg');
     // The overlay is drawn when first opened, from the photo in the bucket, and then kept there.
-    await expect(client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/overlay.png` }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
+    await expect(client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/overlay.jpg` }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
     const drawn = await request(http).get(`/api/attempts/${id}/overlay`).set(student.auth).expect(200);
-    expect(drawn.headers['content-type']).toBe('image/png');
-    const overlay = await client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/overlay.png` }));
-    expect(overlay.ContentType).toBe('image/png');
+    expect(drawn.headers['content-type']).toBe('image/jpeg');
+    const overlay = await client.send(new HeadObjectCommand({ Bucket: 'e2e-photos', Key: `attempts/${id}/overlay.jpg` }));
+    expect(overlay.ContentType).toBe('image/jpeg');
     expect(overlay.ContentLength).toBe(drawn.body.length);
     const served = await request(http).get(`/api/attempts/${id}/photo`).set(student.auth).expect(200);
     expect(served.headers['content-type']).toBe('image/jpeg');

@@ -56,7 +56,8 @@ export class AttemptsController {
   @Get(':id/overlay')
   async overlay(@CurrentUser() caller: AuthUser, @Param('id', parseId()) id: string, @Res() response: Response): Promise<void> {
     const bytes = await this.attemptsService.image(caller, id, 'overlay');
-    response.type('image/png').setHeader('cache-control', 'private, max-age=300');
+    // JPEG since overlays were made smaller; attempts graded before keep their PNG.
+    response.type(photoContentType(bytes)).setHeader('cache-control', 'private, max-age=300');
     response.send(bytes);
   }
 

@@ -135,9 +135,10 @@ export class AttemptsService {
     const row = await this.attemptsRepository.findOne({ where: { id: attempt.id }, select: { id: true, overlayPlan: true } });
     const photo = row?.overlayPlan ? await this.storage.get(attempt.photoKey) : undefined;
     if (!row?.overlayPlan || !photo || !attempt.overlayKey) return undefined;
-    const png = await renderOverlayFromPhoto(photo, row.overlayPlan);
-    await this.storage.put(attempt.overlayKey, png);
-    return png;
+    // Attempts graded before overlays were JPEG keep their `.png` key and get a PNG.
+    const bytes = await renderOverlayFromPhoto(photo, row.overlayPlan, attempt.overlayKey.endsWith('.png') ? 'png' : 'jpeg');
+    await this.storage.put(attempt.overlayKey, bytes);
+    return bytes;
   }
 
   /** A teacher's score and pass over the machine's, with a comment; the machine mark is kept. */

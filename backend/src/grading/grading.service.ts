@@ -63,8 +63,8 @@ export class GradingService {
     if (!photo) throw new Error(`the stored photo ${attempt.photoKey} is missing`);
     const detail = await measurePhoto(photo);
     // The overlay is drawn when someone first opens it (AttemptsService.image); here only what
-    // it shows is kept, which costs nothing next to drawing and encoding a PNG per attempt.
-    const overlayKey = detail.photo ? `attempts/${attempt.id}/overlay.png` : null;
+    // it shows is kept, which costs nothing next to drawing and encoding a picture per attempt.
+    const overlayKey = detail.photo ? `attempts/${attempt.id}/overlay.jpg` : null;
     const plan = detail.photo ? JSON.stringify(overlayPlan(detail)) : null;
     const outcome = gradeMeasurement(drill, detail.result);
     const written = rowsOf<{ id: string }>(

@@ -119,7 +119,7 @@ export async function seedTeaching(dataSource: DataSource, storage: PhotoStorage
     const photoKey = `attempts/${id}/photo.${stored.extension}`;
     await storage.put(photoKey, stored.bytes);
     // As grading does: the overlay is drawn from this plan when someone first opens it.
-    const overlayKey = detail.photo ? `attempts/${id}/overlay.png` : null;
+    const overlayKey = detail.photo ? `attempts/${id}/overlay.jpg` : null;
     const plan = detail.photo ? overlayPlan(detail) : null;
     const student = byKey.get(studentKey)!;
     await dataSource.getRepository(Attempt).insert({
