@@ -67,7 +67,8 @@ export function expectedCell(attempts: RawAttempt[]): ExpectedCell {
     .filter((s): s is number => s !== null);
   return {
     attempts: attempts.length,
-    passed: attempts.some((a) => a.state === 'graded' && (a.override_pass ?? a.pass) === true),
+    // A teacher's pass stands on any attempt they may mark (graded or sent back for a retake).
+    passed: attempts.some((a) => (a.override_pass ?? (a.state === 'graded' && a.pass)) === true),
     latestAttemptId: attempts[0].id,
     latestState: attempts[0].state,
     latestPass: attempts[0].override_pass ?? attempts[0].pass,
@@ -87,6 +88,7 @@ export function expectedStatus(
     (attempts ?? []).map((a) => ({
       state: a.state,
       pass: a.override_pass ?? a.pass,
+      overridden: a.override_pass !== null,
       createdAt: a.created_at,
     })),
     dueAt,

@@ -33,6 +33,14 @@ describe('assignmentStatus', () => {
     expect(assignmentStatus([attempt('needs-retake')], due, after)).toBe('late');
   });
 
+  it('should count a teacher\'s pass on a photo sent back for a retake, and not the machine\'s own', () => {
+    const passedByTeacher: AttemptFacts = { ...attempt('needs-retake', true), overridden: true };
+    expect(assignmentStatus([passedByTeacher], due, after)).toBe('passed');
+    expect(assignmentStatus([attempt('needs-retake'), passedByTeacher], due, before)).toBe('passed');
+    // Without the override the same pass value on a retake counts for nothing.
+    expect(assignmentStatus([attempt('needs-retake', true)], due, before)).toBe('needs-retake');
+  });
+
   it('should say failed when the newest graded attempt did not pass', () => {
     expect(assignmentStatus([attempt('graded', false)], due, before)).toBe('failed');
   });
@@ -48,7 +56,9 @@ describe('assignmentStatus', () => {
     const one = states.flatMap((state) =>
       state === 'graded'
         ? [attempt(state, true), attempt(state, false), attempt(state, null)]
-        : [attempt(state)],
+        : state === 'needs-retake'
+          ? [attempt(state), { ...attempt(state, true), overridden: true }, { ...attempt(state, false), overridden: true }]
+          : [attempt(state)],
     );
     const lists: AttemptFacts[][] = [[]];
     for (let n = 0; n < 3; n += 1)
@@ -57,7 +67,7 @@ describe('assignmentStatus', () => {
     for (const list of lists) {
       const summary = list.length
         ? {
-            passed: list.some((a) => a.state === 'graded' && a.pass === true),
+            passed: list.some((a) => a.pass === true && (a.overridden === true || a.state === 'graded')),
             latestState: list[0].state,
           }
         : undefined;

@@ -6,12 +6,15 @@ export interface AttemptFacts {
   state: 'queued' | 'measuring' | 'graded' | 'needs-retake' | 'failed';
   /** The effective pass (the teacher's override when there is one). */
   pass: boolean | null;
+  /** Whether `pass` is a teacher's override (which stands whatever the machine made of the photo). */
+  overridden?: boolean;
   createdAt: Date;
 }
 
 /**
  * A student's status from their attempts (newest first) and the due date. A pass by any attempt
- * stands; otherwise the newest attempt decides; nothing handed in after the due date is late.
+ * stands (a graded one's, or a teacher's on any attempt, a retake included); otherwise the
+ * newest attempt decides; nothing handed in after the due date is late.
  */
 export function assignmentStatus(
   attempts: AttemptFacts[],
@@ -21,7 +24,7 @@ export function assignmentStatus(
   return statusFromSummary(
     attempts.length
       ? {
-          passed: attempts.some((a) => a.state === 'graded' && a.pass === true),
+          passed: attempts.some((a) => a.pass === true && (a.overridden === true || a.state === 'graded')),
           latestState: attempts[0].state,
         }
       : undefined,

@@ -6,6 +6,7 @@ import { AddAssignmentCells1764892800000 } from './1764892800000-AddAssignmentCe
 import { AddAssignmentStandings1764896400000 } from './1764896400000-AddAssignmentStandings';
 import { AddInvitationRevokedAt1764900000000 } from './1764900000000-AddInvitationRevokedAt';
 import { AddClassListStamps1764907200000 } from './1764907200000-AddClassListStamps';
+import { CountTeacherPassOnRetakes1764910800000 } from './1764910800000-CountTeacherPassOnRetakes';
 
 /** Every migration, oldest first. Listed by hand so no glob or folder path is needed at run time. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   AddAssignmentStandings1764896400000,
   AddInvitationRevokedAt1764900000000,
   AddClassListStamps1764907200000,
+  CountTeacherPassOnRetakes1764910800000,
 ];
