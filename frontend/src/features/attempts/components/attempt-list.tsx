@@ -11,7 +11,6 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorAlert } from '@/components/ui/error-alert';
 import { Loading } from '@/components/ui/loading';
 import { PassBadge } from '@/components/ui/pass-badge';
-import { RowActionsMenu, wideOnlyCell } from '@/components/ui/row-actions-menu';
 import { VisuallyHidden } from '@/components/ui/visually-hidden';
 import { useAttempts, type AttemptFilter } from '../api/get-attempts';
 import type { Attempt } from '../types';
@@ -63,48 +62,33 @@ export function AttemptList({
             {showStudent && <TableCell>Student</TableCell>}
             <TableCell>Drill</TableCell>
             <TableCell>Outcome</TableCell>
-            <TableCell sx={wideOnlyCell}>
+            <TableCell>
               <VisuallyHidden>Open</VisuallyHidden>
             </TableCell>
           </TableRow>
         </TableHead>
         <TableBody>
-          {attempts.data.map((attempt) => {
-            const when = new Date(attempt.createdAt).toLocaleString(undefined, {
-              dateStyle: 'medium',
-              timeStyle: 'short',
-            });
-            // The teacher's list is one assignment's, so the student tells its rows apart.
-            const rowName = `${showStudent ? attempt.student.displayName : attempt.drill.title}, ${when}`;
-            return (
-              <TableRow key={attempt.id}>
-                <TableCell>
-                  {when}
-                  {/* At phone width the Open column lies past the table's edge: its link here. */}
-                  <RowActionsMenu
-                    rowName={rowName}
-                    actions={[
-                      {
-                        label: showStudent ? 'Review the attempt' : 'Open the attempt',
-                        to: attemptHref(attempt.id),
-                      },
-                    ]}
-                  />
-                </TableCell>
-                {showStudent && <TableCell>{attempt.student.displayName}</TableCell>}
-                <TableCell>{attempt.drill.title}</TableCell>
-                <TableCell>
-                  <Outcome attempt={attempt} />
-                  {attempt.override ? " (teacher's mark)" : ''}
-                </TableCell>
-                <TableCell sx={wideOnlyCell}>
-                  <Button size="small" component={RouterLink} to={attemptHref(attempt.id)}>
-                    {showStudent ? 'Review' : 'Open'}
-                  </Button>
-                </TableCell>
-              </TableRow>
-            );
-          })}
+          {attempts.data.map((attempt) => (
+            <TableRow key={attempt.id}>
+              <TableCell>
+                {new Date(attempt.createdAt).toLocaleString(undefined, {
+                  dateStyle: 'medium',
+                  timeStyle: 'short',
+                })}
+              </TableCell>
+              {showStudent && <TableCell>{attempt.student.displayName}</TableCell>}
+              <TableCell>{attempt.drill.title}</TableCell>
+              <TableCell>
+                <Outcome attempt={attempt} />
+                {attempt.override ? " (teacher's mark)" : ''}
+              </TableCell>
+              <TableCell>
+                <Button size="small" component={RouterLink} to={attemptHref(attempt.id)}>
+                  {showStudent ? 'Review' : 'Open'}
+                </Button>
+              </TableCell>
+            </TableRow>
+          ))}
         </TableBody>
       </Table>
     </TableContainer>
