@@ -6,9 +6,6 @@ import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/config/paths';
 import type { SessionUser } from '@/lib/auth-store';
 
-// The phone menu drawer comes in the same chunk as this menu (see `app-layout.tsx`).
-export { default as NavDrawer } from './nav-drawer';
-
 const roleWords = { admin: 'Admin', teacher: 'Teacher', student: 'Student' } as const;
 
 /**

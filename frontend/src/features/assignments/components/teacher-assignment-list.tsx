@@ -10,7 +10,6 @@ import { Link as RouterLink } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorAlert } from '@/components/ui/error-alert';
 import { Loading } from '@/components/ui/loading';
-import { RowActionsMenu, wideOnlyCell } from '@/components/ui/row-actions-menu';
 import { VisuallyHidden } from '@/components/ui/visually-hidden';
 import { useAssignments } from '../api/get-assignments';
 import { dueWords } from './due-date';
@@ -27,14 +26,9 @@ export function TeacherAssignmentList({
 }) {
   const assignments = useAssignments({ classId });
   if (assignments.isPending) return <Loading label="Loading assignments…" />;
-  if (assignments.isError)
-    return <ErrorAlert error={assignments.error} onRetry={() => assignments.refetch()} />;
+  if (assignments.isError) return <ErrorAlert error={assignments.error} onRetry={() => assignments.refetch()} />;
   if (assignments.data.length === 0) {
-    return (
-      <EmptyState title="Nothing assigned yet">
-        Pick a drill and give it to a class with a due date.
-      </EmptyState>
-    );
+    return <EmptyState title="Nothing assigned yet">Pick a drill and give it to a class with a due date.</EmptyState>;
   }
   return (
     <TableContainer component={Paper}>
@@ -49,7 +43,7 @@ export function TeacherAssignmentList({
             <TableCell align="right">Not passed</TableCell>
             <TableCell align="right">Not started</TableCell>
             <TableCell align="right">Late</TableCell>
-            <TableCell sx={wideOnlyCell}>
+            <TableCell>
               <VisuallyHidden>Attempts</VisuallyHidden>
             </TableCell>
           </TableRow>
@@ -59,14 +53,7 @@ export function TeacherAssignmentList({
             const c = assignment.counts;
             return (
               <TableRow key={assignment.id}>
-                <TableCell>
-                  {assignment.drill.title}
-                  {/* At phone width the Attempts column lies past the table's edge: its link here. */}
-                  <RowActionsMenu
-                    rowName={assignment.drill.title}
-                    actions={[{ label: 'See the attempts', to: assignmentHref(assignment.id) }]}
-                  />
-                </TableCell>
+                <TableCell>{assignment.drill.title}</TableCell>
                 {showClass && <TableCell>{assignment.className}</TableCell>}
                 <TableCell>{dueWords(assignment.dueAt)}</TableCell>
                 <TableCell align="right">{c?.passed ?? 0}</TableCell>
@@ -74,13 +61,8 @@ export function TeacherAssignmentList({
                 <TableCell align="right">{c?.failed ?? 0}</TableCell>
                 <TableCell align="right">{c?.['not-started'] ?? 0}</TableCell>
                 <TableCell align="right">{c?.late ?? 0}</TableCell>
-                <TableCell sx={wideOnlyCell}>
-                  <Button
-                    size="small"
-                    component={RouterLink}
-                    to={assignmentHref(assignment.id)}
-                    aria-label={`Attempts for ${assignment.drill.title}`}
-                  >
+                <TableCell>
+                  <Button size="small" component={RouterLink} to={assignmentHref(assignment.id)} aria-label={`Attempts for ${assignment.drill.title}`}>
                     Attempts
                   </Button>
                 </TableCell>
