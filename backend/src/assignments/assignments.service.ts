@@ -83,6 +83,11 @@ const STAMPS_SQL = {
              WHERE m.student_id = $1`,
 };
 
+/** Which list a caller gets: their own classes' (teacher, student) or every class's (admin). */
+function listRole(caller: AuthUser): 'teacher' | 'student' | 'admin' {
+  return caller.role === 'student' ? 'student' : caller.role === 'admin' ? 'admin' : 'teacher';
+}
+
 /** An assignment as parsed from the JSON the API sends, with its dates as Dates again. */
 function withDates(view: AssignmentView): AssignmentView {
   return { ...view, dueAt: new Date(view.dueAt), createdAt: new Date(view.createdAt) };
@@ -134,12 +139,17 @@ export class AssignmentsService {
    * (one short row each); the status rule's part (a student's status, a teacher's counts) is
    * added to each object's text here. Parsing a 5 KB list and serialising it again, and pg's
    * parsing of 16 fields a row before that, were about a fifth of the route's server time.
+   *
+   * A teacher's or student's rows are kept and served again while the counters of the caller's
+   * classes read now equal the ones read just before the rows were (then nothing the list shows
+   * has been written since; see the AddClassListStamps migration). The status rule's text is
+   * kept too until the next due date still ahead passes. An admin's list is always read.
    */
   async findAllJson(caller: AuthUser, filter: { classId?: string } = {}): Promise<string> {
-    if (caller.role === 'admin' || !this.keptLists) {
+    const role = listRole(caller);
+    if (role === 'admin' || !this.keptLists) {
       return this.listJson(caller, await this.readList(caller, filter), Date.now()).json;
     }
-    const role = caller.role === 'student' ? 'student' : 'teacher';
     const [{ stamps }] = await preparedQuery<{ stamps: string }>(
       this.dataSource,
       `class-list-stamps-${role}`,
@@ -180,8 +190,7 @@ export class AssignmentsService {
   }
 
   private async readList(caller: AuthUser, { classId }: { classId?: string }): Promise<ListRow[]> {
-    const role =
-      caller.role === 'student' ? 'student' : caller.role === 'admin' ? 'admin' : 'teacher';
+    const role = listRole(caller);
     let where =
       role === 'admin'
         ? 'TRUE'
